@@ -1,0 +1,80 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { toNodeHandler } from 'better-auth/node';
+import express, { type Express } from 'express';
+import rateLimit from 'express-rate-limit';
+import helmet from 'helmet';
+import type { Database } from '@/db/client';
+import type { Auth } from './auth';
+import type { Env } from './env';
+import { apiNotFound, errorHandler } from './errors';
+import { requireSameOrigin, requireSession, requireSiteAdmin } from './middleware/session';
+import { devMailRouter } from './routes/dev-mail';
+import { healthRouter } from './routes/health';
+import { sitesRouter } from './routes/sites';
+import { tonightRouter } from './routes/tonight';
+
+export interface AppDeps {
+  env: Env;
+  db: Database;
+  auth: Auth;
+}
+
+/** Builds the Express app: better-auth, the JSON API, then the exported web build. */
+export function createApp({ env, db, auth }: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+
+  // better-auth reads its own bodies: mount it before express.json().
+  app.use('/api/auth', rateLimit({ windowMs: 60_000, limit: env.AUTH_RATE_LIMIT, standardHeaders: 'draft-8', legacyHeaders: false }));
+  app.all('/api/auth/*splat', toNodeHandler(auth));
+
+  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api/health', healthRouter(db));
+
+  const session = requireSession(auth);
+  const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
+  app.use('/api/sites', session, sameOrigin, sitesRouter(db));
+  app.use('/api/tonight', session, tonightRouter(db));
+  if (env.DEV_MAIL_PAGE === 'on') app.use('/api/dev/mail', session, requireSiteAdmin, devMailRouter(db));
+  app.use('/api', apiNotFound);
+
+  mountWebBuild(app, path.resolve(env.WEB_DIST));
+  app.use(errorHandler);
+  return app;
+}
+
+/** Serves the Expo web export: hashed assets cached for a year, every other path gets index.html. */
+function mountWebBuild(app: Express, dist: string): void {
+  const index = path.join(dist, 'index.html');
+  if (!fs.existsSync(index)) return;
+  app.use(['/_expo', '/assets'], (req, res, next) => {
+    res.set('Cache-Control', 'public, max-age=31536000, immutable');
+    next();
+  });
+  app.use(express.static(dist, { index: false, maxAge: 0 }));
+  app.get('/{*splat}', (req, res) => {
+    if (path.extname(req.path)) {
+      res.status(404).type('text/plain').send('Not found');
+      return;
+    }
+    res.set('Cache-Control', 'no-cache');
+    res.sendFile(index);
+  });
+}

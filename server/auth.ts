@@ -1,0 +1,57 @@
+import { betterAuth } from 'better-auth';
+import { drizzleAdapter } from 'better-auth/adapters/drizzle';
+import { admin, organization } from 'better-auth/plugins';
+import type { Database } from '@/db/client';
+import * as schema from '@/db/schema';
+import type { Env } from './env';
+import { actionMail, type Mailer } from './mail/mailer';
+
+/** Roles inside a club (better-auth organization plugin). */
+export const CLUB_ROLES = ['owner', 'admin', 'member'] as const;
+/** Site-wide role of a site administrator (better-auth admin plugin). */
+export const SITE_ADMIN_ROLE = 'admin';
+
+export function createAuth(env: Env, db: Database, mailer: Mailer) {
+  return betterAuth({
+    appName: 'Nightloom',
+    logger: { disabled: env.NODE_ENV === 'test', level: 'warn' },
+    baseURL: env.BASE_URL,
+    basePath: '/api/auth',
+    secret: env.BETTER_AUTH_SECRET,
+    trustedOrigins: [new URL(env.BASE_URL).origin],
+    database: drizzleAdapter(db, { provider: 'pg', schema }),
+    emailAndPassword: {
+      enabled: true,
+      minPasswordLength: 8,
+      maxPasswordLength: 128,
+      revokeSessionsOnPasswordReset: true,
+      resetPasswordTokenExpiresIn: 3600,
+      sendResetPassword: async ({ user, url }) => {
+        await mailer.send(
+          actionMail(user.email, 'Reset your Nightloom password', `Someone asked to reset the password of ${user.email}. The link works for one hour.`, 'Choose a new password', url),
+        );
+      },
+    },
+    session: { expiresIn: 60 * 60 * 24 * 30, updateAge: 60 * 60 * 24 },
+    advanced: {
+      // better-auth turns its Origin (CSRF) check off when NODE_ENV=test; keep it on everywhere.
+      disableOriginCheck: false,
+    },
+    plugins: [
+      admin({ defaultRole: 'user', adminRoles: [SITE_ADMIN_ROLE] }),
+      organization({
+        allowUserToCreateOrganization: true,
+        creatorRole: 'owner',
+        invitationExpiresIn: 60 * 60 * 24 * 7,
+        sendInvitationEmail: async ({ email, invitation, organization: club, inviter }) => {
+          const url = `${env.BASE_URL}/invitations/${invitation.id}`;
+          await mailer.send(
+            actionMail(email, `Join ${club.name} on Nightloom`, `${inviter.user.name} invites you to the club ${club.name} on Nightloom.`, 'Open the invitation', url),
+          );
+        },
+      }),
+    ],
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;
