@@ -1,10 +1,11 @@
+import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
-const root = fileURLToPath(new URL('.', import.meta.url));
+const root = path.dirname(fileURLToPath(import.meta.url));
 
 export default defineConfig({
-  resolve: { alias: { '@': root.replace(/\/$/, '') } },
+  resolve: { alias: { '@': root } },
   test: {
     projects: [
       {

@@ -2,12 +2,13 @@
  * Applies the committed SQL migrations. Drizzle's migrator takes no lock, so several processes
  * starting at once serialise on a PostgreSQL advisory lock. Exits non-zero on failure.
  */
+import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { migrate } from 'drizzle-orm/node-postgres/migrator';
 import { createDatabase, type Database } from './client';
 
 const MIGRATION_LOCK = 72_031_004;
-export const migrationsFolder = fileURLToPath(new URL('./migrations', import.meta.url));
+export const migrationsFolder = path.join(path.dirname(fileURLToPath(import.meta.url)), 'migrations');
 
 export async function runMigrations(db: Database): Promise<void> {
   const client = await db.$client.connect();
