@@ -4,7 +4,9 @@
  */
 import { sql } from 'drizzle-orm';
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { user } from './auth-schema';
+import type { HorizonPoint } from '@/shared/horizon/profile';
+import type { RigInput } from '@/shared/rig/schema';
+import { organization, user } from './auth-schema';
 
 export * from './auth-schema';
 
@@ -20,6 +22,10 @@ export const site = pgTable(
     elevationM: doublePrecision().notNull(),
     timeZone: text().notNull(),
     isDefault: boolean().notNull().default(false),
+    minAltitudeDeg: doublePrecision().notNull().default(30),
+    duskTempC: doublePrecision().notNull().default(10),
+    dawnTempC: doublePrecision().notNull().default(5),
+    horizon: jsonb().$type<HorizonPoint[]>().notNull().default([]),
     version: integer().notNull().default(1),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
@@ -47,4 +53,100 @@ export const devMail = pgTable(
     receivedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('dev_mail_received_at_idx').on(t.receivedAt)],
+);
+
+/** An equipment profile. The validated rig (`shared/rig/schema.ts`) is stored whole in `spec`. */
+export const rig = pgTable(
+  'rig',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    name: text().notNull(),
+    spec: jsonb().$type<RigInput>().notNull(),
+    version: integer().notNull().default(1),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('rig_owner_id_idx').on(t.ownerId)],
+);
+
+/** An imported catalogue, personal (ownerId) or shared with a club (clubId). */
+export const catalogue = pgTable(
+  'catalogue',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    clubId: text().references(() => organization.id, { onDelete: 'cascade' }),
+    name: text().notNull(),
+    objectCount: integer().notNull().default(0),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('catalogue_owner_id_idx').on(t.ownerId), index('catalogue_club_id_idx').on(t.clubId)],
+);
+
+/** One object of an imported catalogue. `searchKey` holds the normalised designation, aliases and name. */
+export const catalogueObject = pgTable(
+  'catalogue_object',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    catalogueId: uuid().notNull().references(() => catalogue.id, { onDelete: 'cascade' }),
+    designation: text().notNull(),
+    aliases: jsonb().$type<string[]>().notNull().default([]),
+    name: text().notNull().default(''),
+    type: text().notNull(),
+    raDeg: doublePrecision().notNull(),
+    decDeg: doublePrecision().notNull(),
+    majorArcmin: doublePrecision(),
+    minorArcmin: doublePrecision(),
+    positionAngleDeg: doublePrecision(),
+    magnitude: doublePrecision(),
+    searchKey: text().notNull(),
+  },
+  (t) => [uniqueIndex('catalogue_object_designation_idx').on(t.catalogueId, t.designation), index('catalogue_object_catalogue_idx').on(t.catalogueId)],
+);
+
+/** A target on the user's list: a catalogue object or custom coordinates, with its framings. */
+export const target = pgTable(
+  'target',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    designation: text().notNull(),
+    name: text().notNull().default(''),
+    type: text().notNull().default('other'),
+    raDeg: doublePrecision().notNull(),
+    decDeg: doublePrecision().notNull(),
+    majorArcmin: doublePrecision(),
+    minorArcmin: doublePrecision(),
+    positionAngleDeg: doublePrecision(),
+    magnitude: doublePrecision(),
+    notes: text().notNull().default(''),
+    version: integer().notNull().default(1),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('target_owner_id_idx').on(t.ownerId)],
+);
+
+/** A repeatable framing of a target: centre, sky position angle, optional mosaic. */
+export const framing = pgTable(
+  'framing',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    targetId: uuid().notNull().references(() => target.id, { onDelete: 'cascade' }),
+    name: text().notNull(),
+    raDeg: doublePrecision().notNull(),
+    decDeg: doublePrecision().notNull(),
+    positionAngleDeg: doublePrecision().notNull().default(0),
+    mosaicCols: integer().notNull().default(1),
+    mosaicRows: integer().notNull().default(1),
+    overlapPct: doublePrecision().notNull().default(10),
+    rigId: uuid().references(() => rig.id, { onDelete: 'set null' }),
+    source: text().notNull().default('manual'),
+    sourceDetail: jsonb().$type<Record<string, unknown>>().notNull().default({}),
+    version: integer().notNull().default(1),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('framing_target_id_idx').on(t.targetId)],
 );

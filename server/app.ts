@@ -11,6 +11,7 @@ import { apiNotFound, errorHandler } from './errors';
 import { requireSameOrigin, requireSession, requireSiteAdmin } from './middleware/session';
 import { devMailRouter } from './routes/dev-mail';
 import { healthRouter } from './routes/health';
+import { rigsRouter } from './routes/rigs';
 import { sitesRouter } from './routes/sites';
 import { tonightRouter } from './routes/tonight';
 
@@ -51,6 +52,7 @@ export function createApp({ env, db, auth }: AppDeps): Express {
   const session = requireSession(auth);
   const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
   app.use('/api/sites', session, sameOrigin, sitesRouter(db));
+  app.use('/api/rigs', session, sameOrigin, rigsRouter(db));
   app.use('/api/tonight', session, tonightRouter(db));
   if (env.DEV_MAIL_PAGE === 'on') app.use('/api/dev/mail', session, requireSiteAdmin, devMailRouter(db));
   app.use('/api', apiNotFound);

@@ -1,10 +1,13 @@
 import { and, asc, eq, ne } from 'drizzle-orm';
-import { Router } from 'express';
+import express, { Router } from 'express';
+import { z } from 'zod';
 import type { Database } from '@/db/client';
 import { site } from '@/db/schema';
-import { conflict, notFound } from '@/server/errors';
+import { HttpError, notFound } from '@/server/errors';
+import { horizonProfileSchema, parseHorizonCsv } from '@/shared/horizon/profile';
 import { siteInputSchema, siteUpdateSchema, type Site } from '@/shared/schemas/site';
 import { parseBody, parseId } from './validate';
+import { updateVersioned } from './versioned';
 
 type SiteRow = typeof site.$inferSelect;
 
@@ -17,6 +20,10 @@ export function toSite(row: SiteRow): Site {
     elevationM: row.elevationM,
     timeZone: row.timeZone,
     isDefault: row.isDefault,
+    minAltitudeDeg: row.minAltitudeDeg,
+    duskTempC: row.duskTempC,
+    dawnTempC: row.dawnTempC,
+    horizon: row.horizon,
     version: row.version,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
@@ -67,17 +74,28 @@ export function sitesRouter(db: Database): Router {
     const ownerId = res.locals.user.id;
     const { version, ...input } = parseBody(siteUpdateSchema, req);
     const row = await db.transaction(async (tx) => {
-      const [current] = await tx.select().from(site).where(and(eq(site.id, id), eq(site.ownerId, ownerId))).for('update');
-      if (!current) throw notFound('No such site');
-      if (current.version !== version) throw conflict('This site was changed elsewhere since you opened it', { current: toSite(current) });
+      // Clear the old default first: the one-default index is checked row by row. A 404 or 409
+      // below rolls this back with the rest.
       if (input.isDefault) await tx.update(site).set({ isDefault: false }).where(and(eq(site.ownerId, ownerId), ne(site.id, id)));
-      const [updated] = await tx
-        .update(site)
-        .set({ ...input, version: current.version + 1, updatedAt: new Date() })
-        .where(eq(site.id, id))
-        .returning();
-      return updated!;
+      return updateVersioned<typeof site, SiteRow>(tx, site, { id, ownerId }, version, input, toSite, 'site');
     });
+    res.json({ site: toSite(row) });
+  });
+
+  // A horizon profile uploaded as CSV (two columns: azimuth, altitude in degrees). Any bad row
+  // answers 400 with every error by line, and the stored profile stays as it was.
+  r.put('/:id/horizon', express.text({ type: ['text/csv', 'text/plain'], limit: '256kb' }), async (req, res) => {
+    const id = parseId(req.params.id, 'site');
+    const { version } = z.object({ version: z.coerce.number().int().positive('Send the version you edited') }).parse(req.query);
+    if (typeof req.body !== 'string') throw new HttpError(415, 'unsupported-media-type', 'Send the horizon as text/csv');
+    const parsed = parseHorizonCsv(req.body);
+    if ('errors' in parsed) {
+      throw new HttpError(400, 'invalid-csv', `The horizon file has ${parsed.errors.length} bad row(s); nothing was saved`, { rows: parsed.errors });
+    }
+    const checked = horizonProfileSchema.parse({ points: parsed.points });
+    const row = await db.transaction((tx) =>
+      updateVersioned<typeof site, SiteRow>(tx, site, { id, ownerId: res.locals.user.id }, version, { horizon: checked.points }, toSite, 'site'),
+    );
     res.json({ site: toSite(row) });
   });
 

@@ -101,3 +101,35 @@ describe('/api/sites', () => {
     expect((await owner.agent.get(`/api/sites/${id}`)).status).toBe(404);
   });
 });
+
+describe('/api/sites/:id/horizon (CSV upload)', () => {
+  it('stores a good profile and refuses a bad file by line, keeping the old profile', async () => {
+    const created = await owner.agent.post('/api/sites').set('Origin', ORIGIN).send({ ...validSite, name: 'Tree Line' });
+    const id = created.body.site.id as string;
+    const good = await owner.agent.put(`/api/sites/${id}/horizon?version=1`).set('Origin', ORIGIN).set('Content-Type', 'text/csv').send('azimuth,altitude\n0,10\n90,25\n180,15\n270,5\n');
+    expect(good.status).toBe(200);
+    expect(good.body.site.horizon).toEqual([{ azDeg: 0, altDeg: 10 }, { azDeg: 90, altDeg: 25 }, { azDeg: 180, altDeg: 15 }, { azDeg: 270, altDeg: 5 }]);
+    expect(good.body.site.version).toBe(2);
+    const bad = await owner.agent.put(`/api/sites/${id}/horizon?version=2`).set('Origin', ORIGIN).set('Content-Type', 'text/csv').send('0,10\n90,abc\n400,5\n');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('invalid-csv');
+    expect(bad.body.error.rows.map((r: { line: number }) => r.line)).toEqual([2, 3]);
+    const after = await owner.agent.get(`/api/sites/${id}`);
+    expect(after.body.site.horizon).toHaveLength(4);
+    expect(after.body.site.version).toBe(2);
+  });
+
+  it('401 without a session, 400 without a version, 409 on a stale version', async () => {
+    const created = await owner.agent.post('/api/sites').set('Origin', ORIGIN).send({ ...validSite, name: 'Roof Edge' });
+    const id = created.body.site.id as string;
+    expect((await request(h.app).put(`/api/sites/${id}/horizon?version=1`).set('Origin', ORIGIN).set('Content-Type', 'text/csv').send('0,10\n')).status).toBe(401);
+    expect((await owner.agent.put(`/api/sites/${id}/horizon`).set('Origin', ORIGIN).set('Content-Type', 'text/csv').send('0,10\n')).status).toBe(400);
+    expect((await owner.agent.put(`/api/sites/${id}/horizon?version=7`).set('Origin', ORIGIN).set('Content-Type', 'text/csv').send('0,10\n')).status).toBe(409);
+  });
+
+  it('rejects horizon points out of order in a JSON edit with a field error', async () => {
+    const res = await owner.agent.post('/api/sites').set('Origin', ORIGIN).send({ ...validSite, horizon: [{ azDeg: 90, altDeg: 10 }, { azDeg: 45, altDeg: 10 }] });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toContain('horizon.1.azDeg');
+  });
+});
