@@ -1,0 +1,5 @@
+import { MailScreen } from '@/components/mail/mail-screen';
+
+export default function MailRoute() {
+  return <MailScreen />;
+}

@@ -1,0 +1,39 @@
+import Svg, { Circle, Path, Rect } from 'react-native-svg';
+
+export type NavIconName = 'tonight' | 'sites' | 'account' | 'mail';
+
+type IconProps = { name: NavIconName; color: string; size?: number };
+
+/** Line icons for the navigation, drawn for Nightloom on a 24-unit grid. */
+export function NavIcon({ name, color, size = 22 }: IconProps) {
+  const stroke = { stroke: color, strokeWidth: 1.7, fill: 'none', strokeLinecap: 'round' as const, strokeLinejoin: 'round' as const };
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" accessibilityElementsHidden importantForAccessibility="no">
+      {name === 'tonight' ? (
+        <>
+          <Path d="M14.5 3.5a6.5 6.5 0 1 0 6 9.2 5 5 0 1 1-6-9.2z" {...stroke} />
+          <Path d="M3 20h18" {...stroke} />
+          <Circle cx={5.5} cy={6} r={0.9} fill={color} />
+        </>
+      ) : null}
+      {name === 'sites' ? (
+        <>
+          <Path d="M12 21s-6-5.6-6-10.5a6 6 0 0 1 12 0C18 15.4 12 21 12 21z" {...stroke} />
+          <Circle cx={12} cy={10.5} r={2.2} {...stroke} />
+        </>
+      ) : null}
+      {name === 'account' ? (
+        <>
+          <Circle cx={12} cy={8.5} r={3.6} {...stroke} />
+          <Path d="M4.5 20c1.3-3.6 4.1-5.3 7.5-5.3s6.2 1.7 7.5 5.3" {...stroke} />
+        </>
+      ) : null}
+      {name === 'mail' ? (
+        <>
+          <Rect x={3.5} y={5.5} width={17} height={13} rx={2} {...stroke} />
+          <Path d="M4 7l8 6 8-6" {...stroke} />
+        </>
+      ) : null}
+    </Svg>
+  );
+}

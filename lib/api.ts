@@ -1,0 +1,86 @@
+/**
+ * The one fetch client. Same origin, cookie session, JSON in and out. Any non-2xx answer
+ * becomes an `ApiError` carrying the server's `{ error: { code, message, fields } }`.
+ */
+export type FieldErrors = Record<string, string[]>;
+
+export class ApiError extends Error {
+  readonly status: number;
+  readonly code: string;
+  readonly fields: FieldErrors | undefined;
+  /** The whole parsed response body, e.g. `current` on a 409 version conflict. */
+  readonly body: unknown;
+
+  constructor(status: number, code: string, message: string, fields: FieldErrors | undefined, body: unknown) {
+    super(message);
+    this.name = 'ApiError';
+    this.status = status;
+    this.code = code;
+    this.fields = fields;
+    this.body = body;
+  }
+}
+
+type ErrorEnvelope = { error?: { code?: unknown; message?: unknown; fields?: unknown } };
+
+function isFieldErrors(value: unknown): value is FieldErrors {
+  if (!value || typeof value !== 'object') return false;
+  return Object.values(value).every((v) => Array.isArray(v) && v.every((s) => typeof s === 'string'));
+}
+
+async function readBody(response: Response): Promise<unknown> {
+  if (response.status === 204) return undefined;
+  const text = await response.text();
+  if (!text) return undefined;
+  try {
+    return JSON.parse(text) as unknown;
+  } catch {
+    return text;
+  }
+}
+
+function toApiError(status: number, body: unknown): ApiError {
+  const envelope = (body && typeof body === 'object' ? body : {}) as ErrorEnvelope;
+  const error = envelope.error ?? {};
+  const code = typeof error.code === 'string' ? error.code : `http-${status}`;
+  const message = typeof error.message === 'string' ? error.message : `The server answered ${status}.`;
+  return new ApiError(status, code, message, isFieldErrors(error.fields) ? error.fields : undefined, body);
+}
+
+async function request<T>(method: string, path: string, body?: unknown, signal?: AbortSignal): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(path, {
+      method,
+      credentials: 'include',
+      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+      signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError(0, 'network', 'Could not reach the Nightloom server.', undefined, undefined);
+  }
+  const parsed = await readBody(response);
+  if (!response.ok) throw toApiError(response.status, parsed);
+  return parsed as T;
+}
+
+/** Builds `path?query` from the defined entries only. */
+export function withQuery(path: string, query: Record<string, string | undefined>): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== '') params.set(key, value);
+  const search = params.toString();
+  return search ? `${path}?${search}` : path;
+}
+
+export const api = {
+  get: <T>(path: string, signal?: AbortSignal) => request<T>('GET', path, undefined, signal),
+  post: <T>(path: string, body: unknown) => request<T>('POST', path, body),
+  put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
+  del: <T = void>(path: string) => request<T>('DELETE', path),
+};
+
+export function isApiError(e: unknown, status?: number): e is ApiError {
+  return e instanceof ApiError && (status === undefined || e.status === status);
+}
