@@ -3,7 +3,7 @@
  * `getAuthTables()` of better-auth 1.7. Column names are snake_case through Drizzle's
  * casing option; timestamps carry a time zone.
  */
-import { boolean, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { bigint, boolean, index, integer, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
 
 const createdAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
 const updatedAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
@@ -109,3 +109,11 @@ export const invitation = pgTable(
   },
   (t) => [index('invitation_organization_id_idx').on(t.organizationId), index('invitation_email_idx').on(t.email)],
 );
+
+/** better-auth's rate-limit counters, kept in the database so every server process shares them. */
+export const rateLimit = pgTable('rate_limit', {
+  id: text().primaryKey(),
+  key: text().notNull().unique(),
+  count: integer().notNull(),
+  lastRequest: bigint({ mode: 'number' }).notNull(),
+});

@@ -51,7 +51,7 @@ step "web build" ensure_web_build
 start_e2e_server() {
   DATABASE_URL="$E2E_DATABASE_URL" node --import tsx db/migrate.ts || return 1
   local envs=(NODE_ENV=production DEV_MAIL_PAGE=on DATABASE_URL="$E2E_DATABASE_URL" PORT="$E2E_PORT"
-    SMTP_PORT="$E2E_SMTP_PORT" BASE_URL="http://127.0.0.1:$E2E_PORT" AUTH_RATE_LIMIT=1000
+    SMTP_PORT="$E2E_SMTP_PORT" BASE_URL="http://127.0.0.1:$E2E_PORT" AUTH_RATE_LIMIT=5000 AUTH_STRICT_RATE_LIMIT=1000
     BETTER_AUTH_SECRET="e2e-secret-not-for-production-0123456789")
   env "${envs[@]}" node --import tsx server/mail/fake-smtp-main.ts >"$ARTIFACTS/e2e-smtp.log" 2>&1 &
   PIDS+=($!)

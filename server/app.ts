@@ -2,10 +2,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { toNodeHandler } from 'better-auth/node';
 import express, { type Express } from 'express';
-import rateLimit from 'express-rate-limit';
 import helmet from 'helmet';
 import type { Database } from '@/db/client';
-import type { Auth } from './auth';
+import { CLIENT_IP_HEADER, type Auth } from './auth';
 import type { Env } from './env';
 import { apiNotFound, errorHandler } from './errors';
 import { requireSameOrigin, requireSession, requireSiteAdmin } from './middleware/session';
@@ -42,9 +41,12 @@ export function createApp({ env, db, auth }: AppDeps): Express {
     }),
   );
 
-  // better-auth reads its own bodies: mount it before express.json().
-  app.use('/api/auth', rateLimit({ windowMs: 60_000, limit: env.AUTH_RATE_LIMIT, standardHeaders: 'draft-8', legacyHeaders: false }));
-  app.all('/api/auth/*splat', toNodeHandler(auth));
+  // better-auth reads its own bodies: mount it before express.json(). Its rate limiter keys on
+  // the client address that Express resolved (trusting only a proxy on loopback).
+  app.all('/api/auth/*splat', (req, _res, next) => {
+    req.headers[CLIENT_IP_HEADER] = req.ip ?? 'unknown';
+    next();
+  }, toNodeHandler(auth));
 
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db));

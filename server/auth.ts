@@ -6,6 +6,9 @@ import * as schema from '@/db/schema';
 import type { Env } from './env';
 import { actionMail, type Mailer } from './mail/mailer';
 
+/** Set by the server from `req.ip` before better-auth sees a request; any client value is replaced. */
+export const CLIENT_IP_HEADER = 'x-nightloom-client-ip';
+
 /** Roles inside a club (better-auth organization plugin). */
 export const CLUB_ROLES = ['owner', 'admin', 'member'] as const;
 /** Site-wide role of a site administrator (better-auth admin plugin). */
@@ -32,10 +35,25 @@ export function createAuth(env: Env, db: Database, mailer: Mailer) {
         );
       },
     },
+    // Counters live in PostgreSQL (no per-process state). The client address comes from Express
+    // (`req.ip`, which honours the trusted proxy setting), passed in CLIENT_IP_HEADER.
+    rateLimit: {
+      enabled: true,
+      storage: 'database',
+      window: 60,
+      max: env.AUTH_RATE_LIMIT,
+      customRules: {
+        '/sign-in/email': { window: 60, max: env.AUTH_STRICT_RATE_LIMIT },
+        '/sign-up/email': { window: 60, max: env.AUTH_STRICT_RATE_LIMIT },
+        '/request-password-reset': { window: 60, max: env.AUTH_STRICT_RATE_LIMIT },
+        '/reset-password': { window: 60, max: env.AUTH_STRICT_RATE_LIMIT },
+      },
+    },
     session: { expiresIn: 60 * 60 * 24 * 30, updateAge: 60 * 60 * 24 },
     advanced: {
       // better-auth turns its Origin (CSRF) check off when NODE_ENV=test; keep it on everywhere.
       disableOriginCheck: false,
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     },
     plugins: [
       admin({ defaultRole: 'user', adminRoles: [SITE_ADMIN_ROLE] }),

@@ -16,8 +16,10 @@ const envSchema = z.object({
   WEB_DIST: z.string().default('dist'),
   /** Show captured mail to site admins (development and tests, never production). */
   DEV_MAIL_PAGE: z.enum(['on', 'off']).optional(),
-  /** Requests per minute per address on /api/auth. */
-  AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(60),
+  /** Requests per minute per client address on /api/auth. */
+  AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  /** Sign-in, sign-up and reset requests per minute per client address. */
+  AUTH_STRICT_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
 });
 
 export type Env = z.infer<typeof envSchema> & { BASE_URL: string; DEV_MAIL_PAGE: 'on' | 'off' };

@@ -21,7 +21,7 @@ export interface Harness {
   close(): Promise<void>;
 }
 
-export async function startHarness(): Promise<Harness> {
+export async function startHarness(envOverrides: Record<string, string> = {}): Promise<Harness> {
   const url = process.env.TEST_DATABASE_URL;
   if (!url) throw new Error('TEST_DATABASE_URL is not set');
   const db = createDatabase(url, 5);
@@ -34,6 +34,8 @@ export async function startHarness(): Promise<Harness> {
     SMTP_PORT: String(smtp.port),
     WEB_DIST: '/nonexistent',
     AUTH_RATE_LIMIT: '10000',
+    AUTH_STRICT_RATE_LIMIT: '10000',
+    ...envOverrides,
   });
   const mailer: Mailer = createMailer({ host: env.SMTP_HOST, port: smtp.port, from: env.MAIL_FROM });
   const app = createApp({ env, db, auth: createAuth(env, db, mailer) });
