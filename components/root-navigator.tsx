@@ -11,12 +11,16 @@ import { useSessionState } from '@/hooks/use-session';
  * signing in or out moves the user without any imperative redirects. `reset-password` is
  * open to both, since the e-mailed link may be opened where someone is signed in.
  */
-/** Cached data belongs to one user: drop it whenever the signed-in user changes (sign-out, expiry). */
+/**
+ * Cached data belongs to one user: drop it when a signed-in user goes away (sign-out, expiry,
+ * another account). Not on signing in: the new user's first queries are already in flight then,
+ * and clearing would cancel them.
+ */
 function useClearCacheOnUserChange(userId: string | null) {
   const queryClient = useQueryClient();
   const previous = useRef(userId);
   useEffect(() => {
-    if (previous.current !== userId) queryClient.clear();
+    if (previous.current !== null && previous.current !== userId) queryClient.clear();
     previous.current = userId;
   }, [userId, queryClient]);
 }
