@@ -112,6 +112,7 @@ export const target = pgTable(
     id: uuid().primaryKey().defaultRandom(),
     ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
     designation: text().notNull(),
+    aliases: jsonb().$type<string[]>().notNull().default([]),
     name: text().notNull().default(''),
     type: text().notNull().default('other'),
     raDeg: doublePrecision().notNull(),

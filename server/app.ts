@@ -10,9 +10,14 @@ import { apiNotFound, errorHandler } from './errors';
 import { requireSameOrigin, requireSession, requireSiteAdmin } from './middleware/session';
 import { devMailRouter } from './routes/dev-mail';
 import { healthRouter } from './routes/health';
+import { catalogueSearchRouter } from './routes/catalogue-search';
+import { cataloguesRouter } from './routes/catalogues';
+import { fitsRouter } from './routes/fits';
 import { rigsRouter } from './routes/rigs';
 import { sitesRouter } from './routes/sites';
+import { targetsRouter } from './routes/targets';
 import { tonightRouter } from './routes/tonight';
+import { visibilityRouter } from './routes/visibility';
 
 export interface AppDeps {
   env: Env;
@@ -55,7 +60,12 @@ export function createApp({ env, db, auth }: AppDeps): Express {
   const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
   app.use('/api/sites', session, sameOrigin, sitesRouter(db));
   app.use('/api/rigs', session, sameOrigin, rigsRouter(db));
+  app.use('/api/targets', session, sameOrigin, targetsRouter(db));
+  app.use('/api/catalogues', session, sameOrigin, cataloguesRouter(db));
+  app.use('/api/catalogue', session, catalogueSearchRouter(db));
+  app.use('/api/fits', session, sameOrigin, fitsRouter());
   app.use('/api/tonight', session, tonightRouter(db));
+  app.use('/api/visibility', session, visibilityRouter(db));
   if (env.DEV_MAIL_PAGE === 'on') app.use('/api/dev/mail', session, requireSiteAdmin, devMailRouter(db));
   app.use('/api', apiNotFound);
 

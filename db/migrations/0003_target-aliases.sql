@@ -1,0 +1,1 @@
+ALTER TABLE "target" ADD COLUMN "aliases" jsonb DEFAULT '[]'::jsonb NOT NULL;
