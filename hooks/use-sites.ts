@@ -51,8 +51,9 @@ export function useCreateSiteMutation() {
 /** The stored site a 409 answer carries, if the error is a version conflict. */
 export function conflictOf(error: unknown): Site | null {
   if (!isApiError(error, 409)) return null;
-  const body = error.body as { current?: Site } | undefined;
-  return body?.current ?? null;
+  // The server puts the stored copy inside the error envelope: `{ error: { code, current } }`.
+  const body = error.body as { error?: { current?: Site }; current?: Site } | undefined;
+  return body?.error?.current ?? body?.current ?? null;
 }
 
 /**
@@ -76,4 +77,25 @@ export function useDeleteSiteMutation() {
     onSuccess: (_data, id) => queryClient.removeQueries({ queryKey: siteKeys.detail(id) }),
     onSettled: invalidate,
   });
+}
+
+/** The per-line errors a refused horizon CSV comes back with (400 `invalid-csv`). */
+export function csvRowsOf(error: unknown): { line: number; message: string }[] | null {
+  if (!isApiError(error, 400) || error.code !== 'invalid-csv') return null;
+  const body = error.body as { error?: { rows?: { line: number; message: string }[] } } | undefined;
+  return body?.error?.rows ?? [];
+}
+
+/**
+ * Stores a horizon CSV on a saved site straight away (`PUT /api/sites/:id/horizon?version=N`),
+ * guarded by the version like any save; 409 exposes `conflict`, 400 the file's bad lines.
+ */
+export function useUploadHorizonMutation(id: string) {
+  const invalidate = useInvalidateSites();
+  const mutation = useMutation({
+    mutationFn: ({ csv, version }: { csv: string; version: number }) =>
+      api.putText<{ site: Site }>(`/api/sites/${encodeURIComponent(id)}/horizon?version=${version}`, csv, 'text/csv').then((r) => r.site),
+    onSettled: invalidate,
+  });
+  return { ...mutation, conflict: conflictOf(mutation.error) };
 }

@@ -47,16 +47,25 @@ function toApiError(status: number, body: unknown): ApiError {
   return new ApiError(status, code, message, isFieldErrors(error.fields) ? error.fields : undefined, body);
 }
 
+/** A body sent as is (e.g. a CSV file) instead of as JSON. */
+class RawBody {
+  constructor(
+    readonly raw: string,
+    readonly contentType: string,
+  ) {}
+}
+
+function encodeBody(body: unknown): { headers: Record<string, string>; body: string | undefined } {
+  if (body === undefined) return { headers: { Accept: 'application/json' }, body: undefined };
+  if (body instanceof RawBody) return { headers: { Accept: 'application/json', 'Content-Type': body.contentType }, body: body.raw };
+  return { headers: { Accept: 'application/json', 'Content-Type': 'application/json' }, body: JSON.stringify(body) };
+}
+
 async function request<T>(method: string, path: string, body?: unknown, signal?: AbortSignal): Promise<T> {
   let response: Response;
   try {
-    response = await fetch(path, {
-      method,
-      credentials: 'include',
-      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-      signal,
-    });
+    const encoded = encodeBody(body);
+    response = await fetch(path, { method, credentials: 'include', headers: encoded.headers, body: encoded.body, signal });
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
     throw new ApiError(0, 'network', 'Could not reach the Nightloom server.', undefined, undefined);
@@ -79,6 +88,8 @@ export const api = {
   post: <T>(path: string, body: unknown) => request<T>('POST', path, body),
   put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
   del: <T = void>(path: string) => request<T>('DELETE', path),
+  /** PUT a text body (e.g. `text/csv`) as is; the answer is JSON as usual. */
+  putText: <T>(path: string, text: string, contentType: string) => request<T>('PUT', path, new RawBody(text, contentType)),
 };
 
 export function isApiError(e: unknown, status?: number): e is ApiError {

@@ -1,6 +1,6 @@
 import Svg, { Circle, Path, Rect } from 'react-native-svg';
 
-export type NavIconName = 'tonight' | 'sites' | 'account' | 'mail';
+export type NavIconName = 'tonight' | 'targets' | 'setup' | 'sites' | 'rig' | 'account' | 'mail' | 'more';
 
 type IconProps = { name: NavIconName; color: string; size?: number };
 
@@ -20,6 +20,27 @@ export function NavIcon({ name, color, size = 22 }: IconProps) {
         <>
           <Path d="M12 21s-6-5.6-6-10.5a6 6 0 0 1 12 0C18 15.4 12 21 12 21z" {...stroke} />
           <Circle cx={12} cy={10.5} r={2.2} {...stroke} />
+        </>
+      ) : null}
+      {name === 'targets' ? (
+        <>
+          <Circle cx={12} cy={12} r={7.5} {...stroke} />
+          <Path d="M12 2.5v4M12 17.5v4M2.5 12h4M17.5 12h4" {...stroke} />
+          <Circle cx={12} cy={12} r={1.1} fill={color} />
+        </>
+      ) : null}
+      {name === 'setup' || name === 'rig' ? (
+        <>
+          {/* A short tube on a tripod, tilted towards the sky. */}
+          <Path d="M5 11.5l11.5-6.2 1.7 3.1L6.7 14.6z" {...stroke} />
+          <Path d="M18.2 5l1.3-.7M11 12.7l-3 8.3M11 12.7l3 8.3M11 12.7V21" {...stroke} />
+        </>
+      ) : null}
+      {name === 'more' ? (
+        <>
+          <Circle cx={5.5} cy={12} r={1.4} fill={color} />
+          <Circle cx={12} cy={12} r={1.4} fill={color} />
+          <Circle cx={18.5} cy={12} r={1.4} fill={color} />
         </>
       ) : null}
       {name === 'account' ? (

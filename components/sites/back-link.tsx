@@ -1,6 +1,6 @@
-import { TextLink } from '@/components/ui/text-link';
+import { BackToSetup } from '@/components/setup/back-to-setup';
 
-/** "‹ Sites" above a detail page. */
+/** "‹ Rig & site" above a site's page (sites are listed there, beside the rigs). */
 export function BackToSites() {
-  return <TextLink href="/sites" label="‹ Sites" variant="small" testID="back-to-sites" />;
+  return <BackToSetup testID="back-to-sites" />;
 }

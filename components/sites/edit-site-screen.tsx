@@ -9,8 +9,8 @@ import { Button } from '@/components/ui/button';
 import { ErrorView } from '@/components/ui/error-view';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Screen } from '@/components/ui/screen';
-import { siteFormValues, useSiteForm } from '@/hooks/use-site-form';
-import { useDeleteSiteMutation, useSiteQuery, useUpdateSiteMutation } from '@/hooks/use-sites';
+import { useSiteForm } from '@/hooks/use-site-form';
+import { csvRowsOf, useDeleteSiteMutation, useSiteQuery, useUpdateSiteMutation, useUploadHorizonMutation } from '@/hooks/use-sites';
 import { isApiError } from '@/lib/api';
 import { cleanError } from '@/lib/clean-error';
 import type { Site, SiteInput } from '@/shared/schemas/site';
@@ -35,19 +35,27 @@ export function EditSiteScreen({ id }: { id: string }) {
   return <SiteEditor initialSite={site.data} />;
 }
 
+/** The upload's failure to show by the horizon, unless a conflict banner or line errors carry it. */
+function uploadFailure(error: unknown): unknown {
+  if (!error || isApiError(error, 409) || csvRowsOf(error)) return null;
+  return error;
+}
+
 function SiteEditor({ initialSite }: { initialSite: Site }) {
   // The version the user is editing; a save sends it, and the server answers 409 if it moved on.
   const [base, setBase] = useState(initialSite);
   const form = useSiteForm(initialSite);
   const update = useUpdateSiteMutation(initialSite.id);
+  const upload = useUploadHorizonMutation(initialSite.id);
   const remove = useDeleteSiteMutation();
-  const conflict = update.conflict;
+  const conflict = update.conflict ?? upload.conflict;
 
   function save(input: SiteInput, version: number) {
+    upload.reset();
     update.mutate(
       { ...input, version },
       {
-        onSuccess: () => router.replace('/sites'),
+        onSuccess: () => router.replace('/setup'),
         onError: (e) => {
           if (isApiError(e, 400) && e.fields) form.setServerErrors(e.fields);
         },
@@ -55,10 +63,29 @@ function SiteEditor({ initialSite }: { initialSite: Site }) {
     );
   }
 
+  function uploadHorizon(csv: string, fileName: string) {
+    update.reset();
+    upload.mutate(
+      { csv, version: base.version },
+      {
+        // Stored: the site moved to a new version; other unsaved edits in the form stay.
+        onSuccess: (site) => {
+          setBase(site);
+          form.horizon.reset(site.horizon);
+        },
+        onError: (e) => {
+          const rows = csvRowsOf(e);
+          if (rows) form.horizon.setCsvErrors(fileName, csv, rows);
+        },
+      },
+    );
+  }
+
   function loadTheirs(theirs: Site) {
     setBase(theirs);
-    form.reset(siteFormValues(theirs));
+    form.resetTo(theirs);
     update.reset();
+    upload.reset();
   }
 
   function keepMine(theirs: Site) {
@@ -67,7 +94,7 @@ function SiteEditor({ initialSite }: { initialSite: Site }) {
   }
 
   function onDelete() {
-    remove.mutate(base.id, { onSuccess: () => router.replace('/sites') });
+    remove.mutate(base.id, { onSuccess: () => router.replace('/setup') });
   }
 
   let banner = null;
@@ -83,8 +110,15 @@ function SiteEditor({ initialSite }: { initialSite: Site }) {
   }
 
   return (
-    <Screen title={base.name} subtitle="Edit the site's place and zone." width="form" above={<BackToSites />}>
-      <SiteForm form={form} submitLabel="Save changes" pending={update.isPending && !conflict} onSubmit={(input) => save(input, base.version)} banner={banner} />
+    <Screen title={base.name} subtitle="Edit the site's place, limits and horizon." width="form" above={<BackToSites />}>
+      <SiteForm
+        form={form}
+        submitLabel="Save changes"
+        pending={update.isPending && !conflict}
+        onSubmit={(input) => save(input, base.version)}
+        banner={banner}
+        horizonUpload={{ onUpload: uploadHorizon, pending: upload.isPending, error: uploadFailure(upload.error) }}
+      />
       <DeleteSiteZone siteName={base.name} pending={remove.isPending} error={remove.error} onDelete={onDelete} />
     </Screen>
   );

@@ -19,7 +19,7 @@ export function NewSiteScreen() {
   function submit(input: SiteInput) {
     // The first site becomes the default: Tonight has to open with something.
     create.mutate(isFirst ? { ...input, isDefault: true } : input, {
-      onSuccess: () => router.replace('/sites'),
+      onSuccess: () => router.replace('/setup'),
       onError: (e) => {
         if (isApiError(e, 400) && e.fields) form.setServerErrors(e.fields);
       },

@@ -1,12 +1,15 @@
 import type { ComponentProps, ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { HorizonSection, type HorizonUpload } from '@/components/sites/horizon-section';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { FormSection } from '@/components/ui/form-section';
 import { SwitchRow } from '@/components/ui/switch-row';
 import { TextField } from '@/components/ui/text-field';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import type { SiteFormState, SiteFormValues } from '@/hooks/use-site-form';
+import { parseNumberText } from '@/lib/number-text';
 import { spacing } from '@/constants/theme';
 import type { SiteInput } from '@/shared/schemas/site';
 
@@ -17,12 +20,17 @@ type SiteFormProps = {
   onSubmit: (input: SiteInput) => void;
   /** Notices above the fields (save errors, edit conflicts). */
   banner?: ReactNode;
+  /** A saved site can store a loaded horizon file at once. */
+  horizonUpload?: HorizonUpload;
 };
 
 type TextKey = Exclude<keyof SiteFormValues, 'isDefault'>;
 
-/** Name, coordinates, elevation and zone of an observing site; checked by the shared schema. */
-export function SiteForm({ form, submitLabel, pending, onSubmit, banner }: SiteFormProps) {
+/**
+ * Everything a site carries: place and zone, planning limits, typical temperatures and the
+ * horizon profile, all checked by the shared schema (saving never drops a field).
+ */
+export function SiteForm({ form, submitLabel, pending, onSubmit, banner, horizonUpload }: SiteFormProps) {
   const { isTablet } = useBreakpoints();
 
   function submit() {
@@ -44,22 +52,26 @@ export function SiteForm({ form, submitLabel, pending, onSubmit, banner }: SiteF
     );
   }
 
+  const pair = (a: ReactNode, b: ReactNode) => (
+    <View style={[styles.pair, isTablet && styles.pairRow]}>
+      <View style={isTablet && styles.half}>{a}</View>
+      <View style={isTablet && styles.half}>{b}</View>
+    </View>
+  );
   const numeric = { inputMode: 'decimal' as const, tabular: true, autoCorrect: false };
   return (
     <View style={styles.form}>
       {banner}
       <Card style={styles.card}>
         {field('name', 'Name', { placeholder: 'e.g. Hilltop field', autoComplete: 'off' })}
-        <View style={[styles.pair, isTablet && styles.pairRow]}>
-          <View style={styles.half}>{field('latitudeDeg', 'Latitude (°)', { ...numeric, placeholder: '47.3769', hint: 'North positive, −90 to 90.' })}</View>
-          <View style={styles.half}>{field('longitudeDeg', 'Longitude (°)', { ...numeric, placeholder: '8.5417', hint: 'East positive, −180 to 180.' })}</View>
-        </View>
-        <View style={[styles.pair, isTablet && styles.pairRow]}>
-          <View style={styles.half}>{field('elevationM', 'Elevation (m)', { ...numeric, placeholder: '600', hint: 'Above sea level.' })}</View>
-          <View style={styles.half}>
-            {field('timeZone', 'Time zone', { autoCapitalize: 'none', autoCorrect: false, placeholder: 'Europe/Zurich', hint: 'An IANA zone; times are shown in it.' })}
-          </View>
-        </View>
+        {pair(
+          field('latitudeDeg', 'Latitude (°)', { ...numeric, placeholder: '47.3769', hint: 'North positive, −90 to 90.' }),
+          field('longitudeDeg', 'Longitude (°)', { ...numeric, placeholder: '8.5417', hint: 'East positive, −180 to 180.' }),
+        )}
+        {pair(
+          field('elevationM', 'Elevation (m)', { ...numeric, placeholder: '600', hint: 'Above sea level.' }),
+          field('timeZone', 'Time zone', { autoCapitalize: 'none', autoCorrect: false, placeholder: 'Europe/Zurich', hint: 'An IANA zone; times are shown in it.' }),
+        )}
         <SwitchRow
           label="Use this as my default site"
           description="Tonight opens with the default site."
@@ -68,6 +80,14 @@ export function SiteForm({ form, submitLabel, pending, onSubmit, banner }: SiteF
           testID="site-default-switch"
         />
       </Card>
+      <FormSection title="Planning" description="Used by the dry run: where imaging may start, and how the night cools (focus drift, camera cooling).">
+        {field('minAltitudeDeg', 'Minimum altitude (°)', { ...numeric, placeholder: '30', hint: 'Lowest altitude worth imaging at; 30° is common practice.' })}
+        {pair(
+          field('duskTempC', 'Dusk temperature (°C)', { ...numeric, placeholder: '10', hint: 'Typical at the end of twilight.' }),
+          field('dawnTempC', 'Dawn temperature (°C)', { ...numeric, placeholder: '5', hint: 'Typical before dawn.' }),
+        )}
+      </FormSection>
+      <HorizonSection table={form.horizon} minAltitudeDeg={parseNumberText(form.values.minAltitudeDeg)} siteName={form.values.name} upload={horizonUpload} />
       <View style={styles.actions}>
         <Button label={submitLabel} onPress={submit} pending={pending} testID="site-form-submit" />
       </View>

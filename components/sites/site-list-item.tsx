@@ -37,7 +37,7 @@ export function SiteListItem({ site }: { site: Site }) {
           {`${formatLatitude(site.latitudeDeg)}   ${formatLongitude(site.longitudeDeg)}   ${formatElevation(site.elevationM)}`}
         </AppText>
         <AppText variant="small" tone="faint">
-          {site.timeZone}
+          {`${site.timeZone} · imaging above ${site.minAltitudeDeg}° · ${site.horizon.length === 0 ? 'flat horizon' : `horizon of ${site.horizon.length} points`}`}
         </AppText>
       </Pressable>
     </Link>

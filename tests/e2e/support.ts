@@ -26,9 +26,17 @@ export async function signInThroughUi(page: Page, email: string, password = PASS
   await page.getByTestId('sign-in-submit').click();
 }
 
-/** Opens a section from the tab bar (phone) or side rail (wide): both carry the same testIDs. */
-export async function openSection(page: Page, id: 'tonight' | 'sites' | 'account' | 'mail') {
-  await page.getByTestId(`nav-${id}`).click();
+export type Section = 'tonight' | 'targets' | 'setup' | 'account' | 'mail';
+
+/**
+ * Opens a section from the tab bar (phone) or side rail (wide): both carry the same testIDs.
+ * On phones a section that does not fit the bar sits under "More" (`nav-more`).
+ */
+export async function openSection(page: Page, id: Section) {
+  const link = page.getByTestId(`nav-${id}`);
+  const more = page.getByTestId('nav-more');
+  if (!(await link.isVisible()) && (await more.isVisible())) await more.click();
+  await link.click();
 }
 
 /** Test fixtures write to the run's own database (never the demo data). */

@@ -1,5 +1,6 @@
-import { SitesScreen } from '@/components/sites/sites-screen';
+import { Redirect } from 'expo-router';
 
+/** Sites are listed on Rig & site, beside the rigs. */
 export default function SitesRoute() {
-  return <SitesScreen />;
+  return <Redirect href="/setup" />;
 }
