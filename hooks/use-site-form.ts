@@ -22,7 +22,6 @@ export type SiteFormValues = {
 const siteFieldsSchema = siteInputSchema.omit({ horizon: true });
 
 // Kept importable from here: other forms read numbers the same way.
-export { parseNumberText };
 
 function toInput(values: SiteFormValues) {
   return {

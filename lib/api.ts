@@ -28,9 +28,8 @@ function isFieldErrors(value: unknown): value is FieldErrors {
   return Object.values(value).every((v) => Array.isArray(v) && v.every((s) => typeof s === 'string'));
 }
 
-async function readBody(response: Response): Promise<unknown> {
-  if (response.status === 204) return undefined;
-  const text = await response.text();
+/** A response text as JSON when it is JSON, else the text itself (undefined when empty). */
+export function parseJsonText(text: string): unknown {
   if (!text) return undefined;
   try {
     return JSON.parse(text) as unknown;
@@ -39,7 +38,13 @@ async function readBody(response: Response): Promise<unknown> {
   }
 }
 
-function toApiError(status: number, body: unknown): ApiError {
+async function readBody(response: Response): Promise<unknown> {
+  if (response.status === 204) return undefined;
+  return parseJsonText(await response.text());
+}
+
+/** The server's `{ error: { code, message, fields } }` envelope as an ApiError. */
+export function toApiError(status: number, body: unknown): ApiError {
   const envelope = (body && typeof body === 'object' ? body : {}) as ErrorEnvelope;
   const error = envelope.error ?? {};
   const code = typeof error.code === 'string' ? error.code : `http-${status}`;

@@ -4,7 +4,7 @@
  * (the browser adds Origin itself); the answer is JSON, and a non-2xx answer becomes the same
  * `ApiError` the JSON client throws.
  */
-import { ApiError, type FieldErrors } from '@/lib/api';
+import { ApiError, parseJsonText as parseJson, toApiError as errorFrom } from '@/lib/api';
 
 export type UploadProgress = { loadedBytes: number; totalBytes: number };
 
@@ -16,29 +16,6 @@ type SendBodyOptions = {
   onProgress?: (progress: UploadProgress) => void;
   signal?: AbortSignal;
 };
-
-function parseJson(text: string): unknown {
-  if (!text) return undefined;
-  try {
-    return JSON.parse(text) as unknown;
-  } catch {
-    return text;
-  }
-}
-
-function isFieldErrors(value: unknown): value is FieldErrors {
-  if (!value || typeof value !== 'object') return false;
-  return Object.values(value).every((v) => Array.isArray(v) && v.every((s) => typeof s === 'string'));
-}
-
-/** The server's `{ error: { code, message, fields } }` as an ApiError, like `lib/api` does. */
-function errorFrom(status: number, body: unknown): ApiError {
-  const envelope = body && typeof body === 'object' ? (body as { error?: Record<string, unknown> }) : {};
-  const error = envelope.error ?? {};
-  const code = typeof error.code === 'string' ? error.code : `http-${status}`;
-  const message = typeof error.message === 'string' ? error.message : `The server answered ${status}.`;
-  return new ApiError(status, code, message, isFieldErrors(error.fields) ? error.fields : undefined, body);
-}
 
 function sizeOf(body: Blob | string): number {
   return typeof body === 'string' ? new Blob([body]).size : body.size;

@@ -10,7 +10,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import { parseNumberText } from '@/hooks/use-site-form';
+import { parseNumberText } from '@/lib/number-text';
 import { useAddTargetMutation } from '@/hooks/use-targets';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { isApiError, type FieldErrors } from '@/lib/api';

@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useState } from 'react';
 
 import type { CatalogueSearchParams } from '@/hooks/use-catalogues';
-import { parseNumberText } from '@/hooks/use-site-form';
+import { parseNumberText } from '@/lib/number-text';
 import type { TargetKind } from '@/shared/targets/schema';
 
 /** Typing settles for this long before a search is sent. */

@@ -1,5 +1,5 @@
 import type { FieldSize, FramingShape } from '@/components/charts/framing-geometry';
-import { parseNumberText } from '@/hooks/use-site-form';
+import { parseNumberText } from '@/lib/number-text';
 import { useZodForm } from '@/hooks/use-zod-form';
 import type { FieldErrors } from '@/lib/api';
 import { rigImaging } from '@/shared/rig/optics';
