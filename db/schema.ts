@@ -151,3 +151,45 @@ export const framing = pgTable(
   },
   (t) => [index('framing_target_id_idx').on(t.targetId)],
 );
+
+/**
+ * A night recipe. `tree` holds the validated recipe tree (`shared/recipe`); the summary columns
+ * are derived from it on every save so the list needs no tree parsing. Deleting sets
+ * `deletedAt` (undo restores it).
+ */
+export const recipe = pgTable(
+  'recipe',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    name: text().notNull(),
+    notes: text().notNull().default(''),
+    rigId: uuid().references(() => rig.id, { onDelete: 'set null' }),
+    siteId: uuid().references(() => site.id, { onDelete: 'set null' }),
+    tree: jsonb().$type<unknown>().notNull(),
+    nodeCount: integer().notNull().default(0),
+    targetCount: integer().notNull().default(0),
+    plannedExposureS: doublePrecision().notNull().default(0),
+    version: integer().notNull().default(1),
+    deletedAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('recipe_owner_id_idx').on(t.ownerId)],
+);
+
+/** Every saved version of a recipe, for history and restore (the newest ones are kept). */
+export const recipeRevision = pgTable(
+  'recipe_revision',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    recipeId: uuid().notNull().references(() => recipe.id, { onDelete: 'cascade' }),
+    version: integer().notNull(),
+    name: text().notNull(),
+    notes: text().notNull().default(''),
+    tree: jsonb().$type<unknown>().notNull(),
+    nodeCount: integer().notNull().default(0),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('recipe_revision_version_idx').on(t.recipeId, t.version)],
+);

@@ -49,8 +49,8 @@ function CustomFields({ form }: { form: ReturnType<typeof useZodForm<CustomValue
       {field('designation', 'Designation', { placeholder: 'e.g. Comet field 1' })}
       {field('name', 'Name (optional)')}
       <View style={styles.pair}>
-        <View style={styles.half}>{field('ra', 'RA (J2000)', { placeholder: '05:35:17.3', tabular: true, hint: 'Hours: 05:35:17.3 or 5.588h' })}</View>
-        <View style={styles.half}>{field('dec', 'Dec (J2000)', { placeholder: '-05:23:28', tabular: true, hint: 'Degrees: -05:23:28' })}</View>
+        <View style={styles.half}>{field('ra', 'RA (J2000)', { placeholder: '05:35:17.3', tabular: true, hint: 'In hours, e.g. 05:35:17.3 or 5.588h' })}</View>
+        <View style={styles.half}>{field('dec', 'Dec (J2000)', { placeholder: '-05:23:28', tabular: true, hint: 'In degrees, e.g. -05:23:28' })}</View>
       </View>
       {field('size', 'Size (′, optional)', { inputMode: 'decimal', tabular: true, placeholder: '0' })}
       <SelectField label="Kind" choices={KIND_CHOICES} value={form.values.type as TargetKind} onChange={(k) => form.setField('type', k)} error={form.errorFor('type')} testID="custom-kind-select" />

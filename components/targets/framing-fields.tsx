@@ -33,8 +33,8 @@ export function FramingFields({ form, rigs }: FramingFieldsProps) {
     <View style={styles.fields}>
       {field('name', 'Name')}
       <View style={styles.row}>
-        <View style={styles.cell}>{field('ra', 'Centre RA (J2000)', { tabular: true, placeholder: '05:35:17.3', hint: 'Hours: 05:35:17.3' })}</View>
-        <View style={styles.cell}>{field('dec', 'Centre Dec (J2000)', { tabular: true, placeholder: '-05:23:28', hint: 'Degrees: -05:23:28' })}</View>
+        <View style={styles.cell}>{field('ra', 'Centre RA (J2000)', { tabular: true, placeholder: '05:35:17.3', hint: 'In hours, e.g. 05:35:17.3' })}</View>
+        <View style={styles.cell}>{field('dec', 'Centre Dec (J2000)', { tabular: true, placeholder: '-05:23:28', hint: 'In degrees, e.g. -05:23:28' })}</View>
       </View>
       {field('positionAngleDeg', 'Position angle (°)', { ...numeric, hint: 'Of the image’s top edge, east of north, 0–360.' })}
       <View style={styles.row}>
