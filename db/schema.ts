@@ -10,12 +10,34 @@ import { organization, user } from './auth-schema';
 
 export * from './auth-schema';
 
+/** Columns of every row a user owns and edits: id, owner, version (optimistic concurrency), timestamps. */
+const ownedRow = () => ({
+  id: uuid().primaryKey().defaultRandom(),
+  ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+  version: integer().notNull().default(1),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+/** The catalogue facts of a deep-sky object (J2000 position, size, magnitude), shared by catalogues and targets. */
+const objectFacts = () => ({
+  designation: text().notNull(),
+  aliases: jsonb().$type<string[]>().notNull().default([]),
+  name: text().notNull().default(''),
+  type: text().notNull().default('other'),
+  raDeg: doublePrecision().notNull(),
+  decDeg: doublePrecision().notNull(),
+  majorArcmin: doublePrecision(),
+  minorArcmin: doublePrecision(),
+  positionAngleDeg: doublePrecision(),
+  magnitude: doublePrecision(),
+});
+
 /** An observing site. `version` is bumped on every update (optimistic concurrency). */
 export const site = pgTable(
   'site',
   {
-    id: uuid().primaryKey().defaultRandom(),
-    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    ...ownedRow(),
     name: text().notNull(),
     latitudeDeg: doublePrecision().notNull(),
     longitudeDeg: doublePrecision().notNull(),
@@ -26,9 +48,6 @@ export const site = pgTable(
     duskTempC: doublePrecision().notNull().default(10),
     dawnTempC: doublePrecision().notNull().default(5),
     horizon: jsonb().$type<HorizonPoint[]>().notNull().default([]),
-    version: integer().notNull().default(1),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
     index('site_owner_id_idx').on(t.ownerId),
@@ -59,13 +78,9 @@ export const devMail = pgTable(
 export const rig = pgTable(
   'rig',
   {
-    id: uuid().primaryKey().defaultRandom(),
-    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    ...ownedRow(),
     name: text().notNull(),
     spec: jsonb().$type<RigInput>().notNull(),
-    version: integer().notNull().default(1),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('rig_owner_id_idx').on(t.ownerId)],
 );
@@ -90,16 +105,7 @@ export const catalogueObject = pgTable(
   {
     id: uuid().primaryKey().defaultRandom(),
     catalogueId: uuid().notNull().references(() => catalogue.id, { onDelete: 'cascade' }),
-    designation: text().notNull(),
-    aliases: jsonb().$type<string[]>().notNull().default([]),
-    name: text().notNull().default(''),
-    type: text().notNull(),
-    raDeg: doublePrecision().notNull(),
-    decDeg: doublePrecision().notNull(),
-    majorArcmin: doublePrecision(),
-    minorArcmin: doublePrecision(),
-    positionAngleDeg: doublePrecision(),
-    magnitude: doublePrecision(),
+    ...objectFacts(),
     searchKey: text().notNull(),
   },
   (t) => [uniqueIndex('catalogue_object_designation_idx').on(t.catalogueId, t.designation), index('catalogue_object_catalogue_idx').on(t.catalogueId)],
@@ -109,22 +115,9 @@ export const catalogueObject = pgTable(
 export const target = pgTable(
   'target',
   {
-    id: uuid().primaryKey().defaultRandom(),
-    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
-    designation: text().notNull(),
-    aliases: jsonb().$type<string[]>().notNull().default([]),
-    name: text().notNull().default(''),
-    type: text().notNull().default('other'),
-    raDeg: doublePrecision().notNull(),
-    decDeg: doublePrecision().notNull(),
-    majorArcmin: doublePrecision(),
-    minorArcmin: doublePrecision(),
-    positionAngleDeg: doublePrecision(),
-    magnitude: doublePrecision(),
+    ...ownedRow(),
+    ...objectFacts(),
     notes: text().notNull().default(''),
-    version: integer().notNull().default(1),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('target_owner_id_idx').on(t.ownerId)],
 );

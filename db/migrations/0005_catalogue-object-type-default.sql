@@ -1,0 +1,1 @@
+ALTER TABLE "catalogue_object" ALTER COLUMN "type" SET DEFAULT 'other';
