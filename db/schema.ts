@@ -186,3 +186,26 @@ export const recipeRevision = pgTable(
   },
   (t) => [uniqueIndex('recipe_revision_version_idx').on(t.recipeId, t.version)],
 );
+
+/**
+ * A stored dry run of a recipe version on a night. The newest one per recipe feeds the recipe
+ * list (its end time); it is stale once the recipe's version has moved on.
+ */
+export const dryRun = pgTable(
+  'dry_run',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    recipeId: uuid().notNull().references(() => recipe.id, { onDelete: 'cascade' }),
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    recipeVersion: integer().notNull(),
+    nightDate: text().notNull(),
+    siteId: uuid().references(() => site.id, { onDelete: 'set null' }),
+    rigId: uuid().references(() => rig.id, { onDelete: 'set null' }),
+    nightEnd: timestamp({ withTimezone: true }),
+    stopCount: integer().notNull().default(0),
+    warnCount: integer().notNull().default(0),
+    result: jsonb().$type<unknown>().notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('dry_run_recipe_created_idx').on(t.recipeId, t.createdAt)],
+);
