@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, ilike, inArray, isNull, lt } from 'drizzle-orm';
 import { Router } from 'express';
 import type { Database } from '@/db/client';
-import { recipe, recipeRevision, rig, site, target } from '@/db/schema';
+import { dryRun, recipe, recipeRevision, rig, site, target } from '@/db/schema';
 import { HttpError, notFound } from '@/server/errors';
 import { recipeCreateSchema, recipeListQuerySchema, recipeSaveSchema, type RecipeDetail, type RecipeListItem } from '@/shared/schemas/recipe-api';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
@@ -93,6 +93,13 @@ export function recipesRouter(db: Database): Router {
       .where(and(...conds))
       .orderBy(order)
       .limit(500);
+    // The newest dry run of each recipe: its end time, and whether the recipe changed since.
+    const latest = await db
+      .selectDistinctOn([dryRun.recipeId], { recipeId: dryRun.recipeId, nightEnd: dryRun.nightEnd, recipeVersion: dryRun.recipeVersion })
+      .from(dryRun)
+      .where(eq(dryRun.ownerId, res.locals.user.id))
+      .orderBy(dryRun.recipeId, desc(dryRun.createdAt));
+    const lastRun = new Map(latest.map((d) => [d.recipeId, d]));
     const recipes: RecipeListItem[] = rows.map(({ r: x, rigName, siteName }) => ({
       id: x.id,
       name: x.name,
@@ -103,7 +110,8 @@ export function recipesRouter(db: Database): Router {
       nodeCount: x.nodeCount,
       targetCount: x.targetCount,
       plannedExposureS: x.plannedExposureS,
-      lastDryRunEnd: null,
+      lastDryRunEnd: lastRun.get(x.id)?.nightEnd?.toISOString() ?? null,
+      lastDryRunStale: lastRun.has(x.id) ? lastRun.get(x.id)!.recipeVersion !== x.version : null,
       version: x.version,
       updatedAt: x.updatedAt.toISOString(),
       deletedAt: null,

@@ -54,6 +54,8 @@ export interface RecipeListItem {
   plannedExposureS: number;
   /** End of the night's plan from the last dry run, when one was made (ISO). */
   lastDryRunEnd: string | null;
+  /** True when the recipe changed after its last dry run; null when it has none. */
+  lastDryRunStale: boolean | null;
   version: number;
   updatedAt: string;
   deletedAt: string | null;

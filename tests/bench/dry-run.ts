@@ -6,7 +6,7 @@
  */
 import { performance } from 'node:perf_hooks';
 import { runDryRun, scanNights } from '@/shared/dry-run';
-import { referenceInput } from '@/shared/dry-run/reference';
+import { referenceInput } from '@/tests/helpers/dry-run-reference';
 import { stepNight } from '@/tests/helpers/stepping-simulator';
 
 export interface DryRunBench {

@@ -9,6 +9,7 @@ import { darkHoursScreen, targetVisibility } from '@/shared/ephemeris/visibility
 import { parseCatalogueCsv, detectCsvLayout } from '@/shared/targets/csv-import';
 import { BUILTIN_TARGETS } from '@/shared/targets/builtin';
 import { searchTargets } from '@/shared/targets/search';
+import { runDryRunBench } from './dry-run';
 
 interface Case {
   name: string;
@@ -75,3 +76,10 @@ for (const c of cases) {
   const { median, p95 } = stats(samples.map((x) => x * scale));
   console.log(`${c.name.padEnd(58)} ${median.toFixed(2).padStart(8)}ms ${p95.toFixed(2).padStart(8)}ms  ${c.goal}`);
 }
+
+// The dry-run cases come last: the run ends with the three lines scripts read
+// (dry-run-median-ms, scan-365-ms, speedup-vs-stepping).
+runDryRunBench().catch((error: unknown) => {
+  console.error(error);
+  process.exitCode = 1;
+});

@@ -5,7 +5,7 @@ import { nodeAt } from '@/shared/recipe/tree-read';
 import type { RecipeNode, RecipeRule } from '@/shared/recipe/types';
 import { defaultRigInput } from '@/shared/rig/schema';
 import { dryRunResultSchema, runDryRun, scanNights, type DryRunInput, type DryRunResult } from '@/shared/dry-run';
-import { recipeBuilder, referenceInput, REFERENCE_SITE, REFERENCE_TARGETS } from '@/shared/dry-run/reference';
+import { recipeBuilder, referenceInput, REFERENCE_SITE, REFERENCE_TARGETS } from '@/tests/helpers/dry-run-reference';
 
 const [, , , M31, , HEART] = Object.keys(REFERENCE_TARGETS) as [string, string, string, string, string, string];
 const b = recipeBuilder(5000);

@@ -4,7 +4,7 @@ import type { NodeParams } from '@/shared/recipe/factory';
 import type { RecipeNode, RecipeRule } from '@/shared/recipe/types';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
 import { runDryRun, type DarkSet, type DryRunFinding, type DryRunInput, type FindingCode } from '@/shared/dry-run';
-import { recipeBuilder, REFERENCE_SITE, REFERENCE_TARGETS } from '@/shared/dry-run/reference';
+import { recipeBuilder, REFERENCE_SITE, REFERENCE_TARGETS } from '@/tests/helpers/dry-run-reference';
 
 // Scenarios at the reference site (46.93° N) on 2026-10-12 (new Moon, astronomical dusk 20:29,
 // dawn 06:03 local) unless a test says otherwise. Target ids as in REFERENCE_TARGETS.

@@ -4,7 +4,7 @@ import type { NodeParams } from '@/shared/recipe/factory';
 import type { RecipeNode, RecipeRule } from '@/shared/recipe/types';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
 import { runDryRun, type DryRunInput, type DryRunResult, type TimelineEvent } from '@/shared/dry-run';
-import { recipeBuilder, REFERENCE_SITE, REFERENCE_TARGETS } from '@/shared/dry-run/reference';
+import { recipeBuilder, REFERENCE_SITE, REFERENCE_TARGETS } from '@/tests/helpers/dry-run-reference';
 
 // M31 from the reference site on 2026-10-12: it crosses the meridian near 00:48 local (22:48 UTC).
 // Default rig: German mount, tracks 15 min past the meridian, flips 300 s after it (mount setting).

@@ -3,7 +3,7 @@ import type { NodeParams } from '@/shared/recipe/factory';
 import type { RecipeNode, RecipeRule } from '@/shared/recipe/types';
 import { defaultRigInput } from '@/shared/rig/schema';
 import { runDryRun, type DryRunInput, type DryRunResult } from '@/shared/dry-run';
-import { recipeBuilder, REFERENCE_SITE, REFERENCE_TARGETS } from '@/shared/dry-run/reference';
+import { recipeBuilder, REFERENCE_SITE, REFERENCE_TARGETS } from '@/tests/helpers/dry-run-reference';
 import { stepNight, type SteppedNight } from '@/tests/helpers/stepping-simulator';
 
 /*

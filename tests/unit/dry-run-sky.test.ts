@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { computeNight } from '@/shared/ephemeris/night';
 import { wrapHours12, wrapHours24 } from '@/shared/ephemeris/sidereal';
 import { altAzOf, hourAngleH, moonAltitudeDeg, moonSeparationDeg, sunAltitudeDeg, transitTime } from '@/shared/ephemeris/sky';
-import { REFERENCE_SITE } from '@/shared/dry-run/reference';
+import { REFERENCE_SITE } from '@/tests/helpers/dry-run-reference';
 import { buildNightSky } from '@/shared/dry-run/sky/night-sky';
 import { firstWhere } from '@/shared/dry-run/sky/search';
 
