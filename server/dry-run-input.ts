@@ -1,6 +1,6 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { Database } from '@/db/client';
-import { framing, rig, site, target } from '@/db/schema';
+import { framing, rig, target } from '@/db/schema';
 import { HttpError } from '@/server/errors';
 import type { DryRunInput, DryRunTarget } from '@/shared/dry-run';
 import { targetIds } from '@/shared/recipe/summary';
@@ -47,14 +47,13 @@ export async function loadDryRunContext(
       framings: frames.filter((f) => f.targetId === t.id).map((f) => ({ id: f.id, name: f.name, raDeg: f.raDeg, decDeg: f.decDeg, positionAngleDeg: f.positionAngleDeg })),
     };
   }
-  const siteInput = { ...siteRow };
   return {
     siteId: siteRow.id,
     rigId: opts.rigId,
     input: {
       tree,
       rig: spec,
-      site: siteInput,
+      site: siteRow,
       nightDate: opts.date ?? currentNightDate(siteRow.timeZone),
       startTime: opts.startTime,
       targets,

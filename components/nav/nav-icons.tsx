@@ -1,6 +1,6 @@
 import Svg, { Circle, Path, Rect } from 'react-native-svg';
 
-export type NavIconName = 'tonight' | 'targets' | 'setup' | 'sites' | 'rig' | 'account' | 'mail' | 'more';
+export type NavIconName = 'tonight' | 'recipes' | 'targets' | 'setup' | 'sites' | 'rig' | 'account' | 'mail' | 'more';
 
 type IconProps = { name: NavIconName; color: string; size?: number };
 
@@ -14,6 +14,12 @@ export function NavIcon({ name, color, size = 22 }: IconProps) {
           <Path d="M14.5 3.5a6.5 6.5 0 1 0 6 9.2 5 5 0 1 1-6-9.2z" {...stroke} />
           <Path d="M3 20h18" {...stroke} />
           <Circle cx={5.5} cy={6} r={0.9} fill={color} />
+        </>
+      ) : null}
+      {name === 'recipes' ? (
+        <>
+          {/* An outline of steps: two top-level lines and two indented under the second. */}
+          <Path d="M4 5.5h3M10 5.5h10M4 10.5h3M10 10.5h10M9 15h2.5M14.5 15H20M9 19.5h2.5M14.5 19.5H20" {...stroke} />
         </>
       ) : null}
       {name === 'sites' ? (

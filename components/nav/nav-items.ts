@@ -3,7 +3,7 @@ import type { NavIconName } from '@/components/nav/nav-icons';
 export type NavItem = {
   key: NavIconName;
   label: string;
-  href: '/' | '/targets' | '/setup' | '/account' | '/mail';
+  href: '/' | '/recipes' | '/targets' | '/setup' | '/account' | '/mail';
   testID: string;
   /** Other path prefixes that belong to this section (e.g. a rig's page under Rig & site). */
   alsoMatches?: string[];
@@ -17,6 +17,7 @@ export type NavItem = {
  */
 export const navItems: NavItem[] = [
   { key: 'tonight', label: 'Tonight', href: '/', testID: 'nav-tonight' },
+  { key: 'recipes', label: 'Recipes', href: '/recipes', testID: 'nav-recipes' },
   { key: 'targets', label: 'Targets', href: '/targets', testID: 'nav-targets' },
   { key: 'setup', label: 'Rig & site', href: '/setup', testID: 'nav-setup', alsoMatches: ['/rigs', '/sites'] },
   { key: 'account', label: 'Account', href: '/account', testID: 'nav-account' },
