@@ -124,36 +124,42 @@ test('a step with a bad exposure is refused with the message under the field', a
   expect((await readRecipe(page)).version).toBe(recipe.version);
 });
 
-test('keyboard (buttons on phones): move, indent, and undo/redo put everything back', async ({ page }, info) => {
+test('keyboard (buttons on phones): move, indent, duplicate, delete, and undo/redo put everything back', async ({ page }, info) => {
   const isPhone = info.project.name === 'phone';
+  const press = async (key: string, button: string) => (isPhone ? page.getByTestId(button).click() : page.keyboard.press(key));
   await signUpWithKit(page, 'Cleo Randall');
   const recipe = await newStarterThroughUi(page);
-  const park = recipe.tree.children.at(-1)!;
-  const base = (await readRecipe(page)).tree.children.map((n) => n.kind);
-  expect(base).toEqual(['cool', 'stage', 'stage', 'warm', 'park']);
-  await selectRow(page, park.id, isPhone);
-  const parkRow = page.getByTestId(`step-row-${park.id}`);
+  expect(recipe.tree.children.map((n) => n.kind)).toEqual(['cool', 'stage', 'stage', 'warm', 'park']);
+  const cool = recipe.tree.children[0]!;
+  const coolRow = page.getByTestId(`step-row-${cool.id}`);
+  const first = async () => (await outline(page))[0];
+  const cools = async () => (await outline(page)).filter((r) => r.endsWith('Cool camera')).length;
+  await selectRow(page, cool.id, isPhone);
 
-  if (isPhone) await page.getByTestId('step-action-up').click();
-  else await page.keyboard.press('Alt+ArrowUp');
-  await expect.poll(async () => (await outline(page)).slice(-2)).toEqual(['1 Park', '1 Warm camera']);
-  // Indent: into the container above it, the second stage, as its last step.
-  if (isPhone) await page.getByTestId('step-action-indent').click();
-  else await page.keyboard.press('Tab');
-  await expect(parkRow).toHaveAttribute('aria-level', '2');
+  // Alt+↓ moves it past the first stage (a move among siblings never enters a container)…
+  await press('Alt+ArrowDown', 'step-action-down');
+  await expect.poll(first).toBe('1 Stage');
+  await expect(coolRow).toHaveAttribute('aria-level', '1');
+  // …and Tab puts it into the stage above, as its last step.
+  await press('Tab', 'step-action-indent');
+  await expect(coolRow).toHaveAttribute('aria-level', '2');
   await snap(page, info, 'composer-04-indented');
 
-  const undo = async () => (isPhone ? page.getByTestId('composer-undo').click() : page.keyboard.press('Control+z'));
-  await undo();
-  await expect(parkRow).toHaveAttribute('aria-level', '1');
-  await undo();
-  await expect.poll(async () => (await outline(page)).slice(-2)).toEqual(['1 Warm camera', '1 Park']);
+  await press('Control+z', 'composer-undo');
+  await expect(coolRow).toHaveAttribute('aria-level', '1');
+  await expect.poll(first).toBe('1 Stage');
+  await press('Control+z', 'composer-undo');
+  await expect.poll(first).toBe('1 Cool camera');
   await expect(page.getByTestId('composer-undo')).toHaveAttribute('aria-disabled', 'true');
-  if (isPhone) await page.getByTestId('composer-redo').click();
-  else await page.keyboard.press('Control+Shift+z');
-  await expect.poll(async () => (await outline(page)).slice(-2)).toEqual(['1 Park', '1 Warm camera']);
+  await press('Control+Shift+z', 'composer-redo');
+  await expect.poll(first).toBe('1 Stage');
+
+  await press('Control+d', 'step-action-duplicate');
+  await expect.poll(cools).toBe(2);
+  await press('Delete', 'step-action-delete');
+  await expect.poll(cools).toBe(1);
   await saved(page);
-  expect((await readRecipe(page)).tree.children.map((n) => n.kind)).toEqual(['cool', 'stage', 'stage', 'park', 'warm']);
+  expect((await readRecipe(page)).tree.children.map((n) => n.kind)).toEqual(['stage', 'cool', 'stage', 'warm', 'park']);
 });
 
 test('two tabs: the second save meets "Changed elsewhere"; overwrite, then load theirs', async ({ page, context }, info) => {
