@@ -10,7 +10,7 @@ import { isApiError } from '@/lib/api';
  * Opens a recipe in the composer. It starts from a copy fetched for this visit (never a cached
  * one), since the version it holds guards every save.
  */
-export function ComposerScreen({ id }: { id: string }) {
+export function ComposerScreen({ id, select }: { id: string; select?: string }) {
   const recipe = useRecipeQuery(id);
   if (recipe.isError) {
     const gone = isApiError(recipe.error, 404);
@@ -21,5 +21,5 @@ export function ComposerScreen({ id }: { id: string }) {
     );
   }
   if (!recipe.data || !recipe.isFetchedAfterMount) return <LoadingView label="Opening the recipe…" />;
-  return <Composer recipe={recipe.data} />;
+  return <Composer recipe={recipe.data} initialSelect={select} />;
 }

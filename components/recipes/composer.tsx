@@ -1,4 +1,5 @@
 import { router } from 'expo-router';
+import { useEffect } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { ComposerBody } from '@/components/recipes/composer-body';
@@ -13,12 +14,22 @@ import { spacing, type Palette } from '@/constants/theme';
 import type { RecipeDetail } from '@/shared/schemas/recipe-api';
 
 /** The recipe composer: header, the drag list of steps, palette, step editor, findings, history. */
-export function Composer({ recipe }: { recipe: RecipeDetail }) {
+export function Composer({ recipe, initialSelect }: { recipe: RecipeDetail; initialSelect?: string }) {
   const styles = useThemedStyles(makeStyles);
   const { isTablet } = useBreakpoints();
   const s = useComposerScreen(recipe);
   const { composer, autosave, view, setPanel } = s;
   const { doc } = composer;
+  // Opened on one step (a dry-run finding): select it, scroll to it and open its editor.
+  const { select } = composer.actions;
+  const { isWide } = s;
+  useEffect(() => {
+    if (!initialSelect) return;
+    select(initialSelect, true);
+    if (!isWide) setPanel('editor');
+    // Only on arrival: later selections are the user's.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [initialSelect]);
   return (
     <View style={[styles.screen, isTablet && styles.screenWide]} testID="composer-screen">
       <ComposerHeader

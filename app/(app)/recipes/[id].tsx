@@ -3,7 +3,8 @@ import { useLocalSearchParams } from 'expo-router';
 import { ComposerScreen } from '@/components/recipes/composer-screen';
 
 export default function RecipeComposerRoute() {
-  const { id } = useLocalSearchParams<{ id: string }>();
+  const { id, select } = useLocalSearchParams<{ id: string; select?: string }>();
   // Keyed so moving between recipes starts a fresh composer (history, selection, autosave).
-  return <ComposerScreen key={id} id={id ?? ''} />;
+  // `select` opens the composer on one step (e.g. from a dry-run finding).
+  return <ComposerScreen key={id} id={id ?? ''} select={select} />;
 }
