@@ -13,6 +13,7 @@ import { healthRouter } from './routes/health';
 import { catalogueSearchRouter } from './routes/catalogue-search';
 import { cataloguesRouter } from './routes/catalogues';
 import { fitsRouter } from './routes/fits';
+import { plansRouter, recipePlanRouter } from './routes/plans';
 import { recipeDryRunsRouter, treeDryRunRouter } from './routes/dry-runs';
 import { recipesRouter } from './routes/recipes';
 import { rigsRouter } from './routes/rigs';
@@ -62,7 +63,8 @@ export function createApp({ env, db, auth }: AppDeps): Express {
   const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
   app.use('/api/sites', session, sameOrigin, sitesRouter(db));
   app.use('/api/rigs', session, sameOrigin, rigsRouter(db));
-  app.use('/api/recipes', session, sameOrigin, recipeDryRunsRouter(db), recipesRouter(db));
+  app.use('/api/recipes', session, sameOrigin, recipeDryRunsRouter(db), recipePlanRouter(db), recipesRouter(db));
+  app.use('/api/plans', session, sameOrigin, plansRouter(db));
   app.use('/api/dry-runs', session, sameOrigin, treeDryRunRouter(db));
   app.use('/api/targets', session, sameOrigin, targetsRouter(db));
   app.use('/api/catalogues', session, sameOrigin, cataloguesRouter(db));

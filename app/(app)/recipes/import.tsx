@@ -1,0 +1,5 @@
+import { PlanImportScreen } from '@/components/plans/plan-import-screen';
+
+export default function PlanImportRoute() {
+  return <PlanImportScreen />;
+}

@@ -1,0 +1,10 @@
+export { exportPlan } from '@/shared/plan/export';
+export { importPlan, type ImportResult, type PlanIssue } from '@/shared/plan/import';
+export { checkFormat, PLAN_FORMAT, PLAN_LIMITS, PLAN_MAJOR } from '@/shared/plan/format';
+export { planSchema, type Plan, type PlanInput, type PlanSite, type PlanTarget } from '@/shared/plan/schema';
+export { planEstimateSchema, type PlanEstimate, type PlanFinding, type PlanStageEstimate } from '@/shared/plan/estimate-schema';
+export { buildPlan, type PlanSource } from '@/shared/plan/build';
+export { planDryRunInput, planEstimate, stageSummary } from '@/shared/plan/estimate';
+export { checkReport, formatCheckReport, formatPlanErrors, type CheckReport, type InvalidReport } from '@/shared/plan/report';
+export { planJsonSchema, planJsonSchemaText, PLAN_SCHEMA_PATH } from '@/shared/plan/json-schema';
+export { planOutline, planPreview, remapPlanTree, OUTLINE_MAX, type OutlineLine, type PlanPreview } from '@/shared/plan/preview';
