@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
 
+import { PlanExportButton } from '@/components/plans/plan-export-button';
 import { ComposerIcon } from '@/components/recipes/composer-icons';
 import { IconButton } from '@/components/recipes/icon-button';
 import { SavePill } from '@/components/recipes/save-pill';
@@ -41,6 +42,7 @@ export type ComposerHeaderProps = {
   facts: string;
   /** Opens the dry run of the saved recipe. */
   onDryRun: () => void;
+  recipeId: string;
 };
 
 /** The recipe's name, edited in place; committed on blur or Enter (one undo step per rename). */
@@ -93,7 +95,12 @@ function FindingsButton({ count, worst, onPress }: { count: number; worst: Findi
 export function ComposerHeader(p: ComposerHeaderProps) {
   const styles = useThemedStyles(makeStyles);
   const { isWide } = useBreakpoints();
-  const dryRun = <Button label="Dry run" size="small" variant="secondary" onPress={p.onDryRun} disabled={p.saveState !== 'saved'} accessibilityLabel="Dry run (once saved)" testID="composer-dry-run" />;
+  const dryRun = (
+    <View style={styles.tools}>
+      <Button label="Dry run" size="small" variant="secondary" onPress={p.onDryRun} disabled={p.saveState !== 'saved'} accessibilityLabel="Dry run (once saved)" testID="composer-dry-run" />
+      <PlanExportButton recipeId={p.recipeId} recipeName={p.name} />
+    </View>
+  );
   const tools = (
     <View style={styles.tools}>
       <IconButton icon="undo" label="Undo" onPress={p.onUndo} disabled={!p.canUndo} testID="composer-undo" />

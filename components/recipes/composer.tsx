@@ -53,6 +53,7 @@ export function Composer({ recipe, initialSelect }: { recipe: RecipeDetail; init
         onHistory={() => setPanel('history')}
         facts={view.facts}
         onDryRun={() => router.push(`/recipes/${recipe.id}/dry-run`)}
+        recipeId={recipe.id}
       />
       <ConflictBanner failure={autosave.failure} otherErrors={view.errors.other} onLoadTheirs={(current) => s.adopt(current, 'replace')} onOverwrite={autosave.overwrite} />
       <ComposerBody composer={composer} actions={s.actions} view={view} can={s.can} rig={s.rig} targets={s.targets} panel={s.panel} setPanel={setPanel} onSelectRow={s.onSelectRow} selection={s.selection} listRef={s.listRef} treeRef={s.treeRef} />

@@ -1,3 +1,4 @@
+import { router } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -63,7 +64,12 @@ export function RecipesScreen() {
   const [newOpen, setNewOpen] = useState(false);
   const settledQ = useSettled(q);
   const deletion = useRecipeDeletion();
-  const newButton = <Button label="New recipe" size="small" onPress={() => setNewOpen(true)} testID="recipes-new" />;
+  const newButton = (
+    <View style={styles.headerActions}>
+      <Button label="Import plan" size="small" variant="secondary" onPress={() => router.push('/recipes/import')} testID="recipes-import" />
+      <Button label="New recipe" size="small" onPress={() => setNewOpen(true)} testID="recipes-new" />
+    </View>
+  );
   return (
     <View style={styles.fill}>
       <Screen title="Recipes" subtitle={isTablet ? 'Night plans as trees of steps, saved as you compose.' : undefined} actions={newButton} testID="recipes-screen">
@@ -99,4 +105,5 @@ const styles = StyleSheet.create({
   search: { flex: 1 },
   sortWide: { width: 220 },
   sortPhone: { width: 150 },
+  headerActions: { flexDirection: 'row', gap: spacing.sm },
 });

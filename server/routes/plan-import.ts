@@ -1,11 +1,9 @@
 import { eq, inArray } from 'drizzle-orm';
 import type { Database } from '@/db/client';
-import { framing, recipe, recipeRevision, rig, site, target } from '@/db/schema';
+import { framing, recipe, rig, site, target } from '@/db/schema';
 import { remapPlanTree, type Plan } from '@/shared/plan';
-import { countNodes } from '@/shared/recipe/tree';
-import { targetIds, totals } from '@/shared/recipe/summary';
 import type { RecipeTree } from '@/shared/recipe/types';
-import { toRecipe } from './recipes';
+import { derived, recordRevision, toRecipe } from './recipes';
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
 
@@ -105,9 +103,8 @@ export async function storeImport(db: Database, ownerId: string, plan: Plan, opt
     await matchFramings(tx, plan, matches, framingIds);
     const createdTargets = await createTargets(tx, ownerId, plan, matches, framingIds);
     const tree: RecipeTree = { children: remapPlanTree(plan.recipe.children, matches.targets, framingIds) };
-    const derived = { nodeCount: countNodes(tree), targetCount: targetIds(tree).length, plannedExposureS: totals(tree).lightShutterS };
-    const [row] = await tx.insert(recipe).values({ ownerId, name: plan.recipe.name, notes: plan.recipe.notes, rigId, siteId, tree, ...derived }).returning();
-    await tx.insert(recipeRevision).values({ recipeId: row!.id, version: row!.version, name: row!.name, notes: row!.notes, tree, nodeCount: row!.nodeCount });
+    const [row] = await tx.insert(recipe).values({ ownerId, name: plan.recipe.name, notes: plan.recipe.notes, rigId, siteId, tree, ...derived(tree) }).returning();
+    await recordRevision(tx, row!);
     return {
       recipe: toRecipe(row!),
       created: { site: siteId !== null && siteId !== matches.site?.id, rig: rigId !== null && rigId !== matches.rig?.id, targets: createdTargets },

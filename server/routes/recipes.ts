@@ -33,7 +33,7 @@ export function toRecipe(r: RecipeRow): RecipeDetail {
 }
 
 /** The columns derived from a tree on every save (the list shows them without parsing trees). */
-function derived(tree: RecipeTree) {
+export function derived(tree: RecipeTree) {
   return { nodeCount: countNodes(tree), targetCount: targetIds(tree).length, plannedExposureS: totals(tree).lightShutterS };
 }
 
@@ -53,7 +53,8 @@ async function checkLinks(db: Database | Tx, ownerId: string, links: { rigId: st
   if (Object.keys(fields).length) throw new HttpError(400, 'invalid-input', 'Some fields need attention', { fields });
 }
 
-async function recordRevision(tx: Tx, row: RecipeRow) {
+/** Stores the row's current version as a revision and prunes the oldest beyond REVISIONS_KEPT. */
+export async function recordRevision(tx: Tx, row: RecipeRow) {
   await tx.insert(recipeRevision).values({ recipeId: row.id, version: row.version, name: row.name, notes: row.notes, tree: row.tree, nodeCount: row.nodeCount });
   await tx.delete(recipeRevision).where(and(eq(recipeRevision.recipeId, row.id), lt(recipeRevision.version, row.version - REVISIONS_KEPT + 1)));
 }
