@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useId, useMemo, useState, type ReactNode } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { ClipPath, Defs, G, Line, Path, Rect, Text as SvgText } from 'react-native-svg';
 
@@ -17,7 +17,15 @@ const PAD = { left: 34, right: 12, top: 26, bottom: 26 };
 const ALT_GRID_DEG = [0, 30, 60, 90];
 const MIN_TICK_GAP_PX = 40;
 
-type AltitudeChartProps = { night: Night; visibility: TargetVisibility; nowMs?: number };
+type AltitudeChartProps = {
+  night: Night;
+  visibility: TargetVisibility;
+  nowMs?: number;
+  /** Drawn over the curve inside the plot (clipped to it), in the chart's own geometry: e.g. a dry run's blocks. */
+  overlay?: (plot: Plot) => ReactNode;
+  /** Off where several charts share one key. */
+  showLegend?: boolean;
+};
 
 const textProps = { fontFamily: fonts.regular, fontSize: 11, fontFeatureSettings: "'tnum'" };
 
@@ -98,8 +106,10 @@ function summaryOf(night: Night, v: TargetVisibility): string {
  * samples, the limit the target must clear (horizon profile or minimum altitude), the target's
  * curve (solid where usable, faint elsewhere), the Moon (dashed) and the transit.
  */
-export function AltitudeChart({ night, visibility, nowMs }: AltitudeChartProps) {
+export function AltitudeChart({ night, visibility, nowMs, overlay, showLegend = true }: AltitudeChartProps) {
   const { palette: c } = useTheme();
+  // Several charts may share a page: each clip path needs its own id.
+  const clipId = `altitude-plot-${useId().replace(/[^a-zA-Z0-9_-]/g, '')}`;
   const { isWide } = useBreakpoints();
   const [width, setWidth] = useState(0);
   const height = isWide ? 280 : 230;
@@ -116,11 +126,11 @@ export function AltitudeChart({ night, visibility, nowMs }: AltitudeChartProps) 
         {width > 0 ? (
           <Svg width={width} height={height}>
             <Defs>
-              <ClipPath id="altitude-plot">
+              <ClipPath id={clipId}>
                 <Rect x={plot.left} y={plot.top} width={plot.right - plot.left} height={plot.bottom - plot.top} />
               </ClipPath>
             </Defs>
-            <G clipPath="url(#altitude-plot)">
+            <G clipPath={`url(#${clipId})`}>
               {sky.map((s) => (
                 <Rect key={`${s.kind}-${s.startMs}`} x={xOf(plot, s.startMs)} y={plot.top} width={Math.max(0, xOf(plot, s.endMs) - xOf(plot, s.startMs)) + 0.5} height={plot.bottom - plot.top} fill={skyColour(s.kind, c)} />
               ))}
@@ -130,6 +140,7 @@ export function AltitudeChart({ night, visibility, nowMs }: AltitudeChartProps) 
               {runs.map((r) => (
                 <Path key={`run-${r.points[0]?.ms}`} d={pathOf(plot, r.points)} stroke={c.accent} strokeWidth={r.usable ? 2.6 : 1.6} strokeOpacity={r.usable ? 1 : 0.4} fill="none" strokeLinejoin="round" />
               ))}
+              {overlay?.(plot)}
             </G>
             <Grid plot={plot} c={c} />
             <TimeAxis plot={plot} night={night} c={c} />
@@ -140,7 +151,7 @@ export function AltitudeChart({ night, visibility, nowMs }: AltitudeChartProps) 
           <View style={{ height }} />
         )}
       </View>
-      <AltitudeLegend />
+      {showLegend ? <AltitudeLegend /> : null}
     </View>
   );
 }

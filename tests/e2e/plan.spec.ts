@@ -96,3 +96,19 @@ test('a broken plan shows its error at the right line, with the line highlighted
   await expect(page.getByTestId('plan-import-summary')).toContainText('Andromeda shared');
   await expect(page.getByTestId('plan-import-errors')).toHaveCount(0);
 });
+
+test('the composer exports its recipe as a plan file', async ({ page }) => {
+  await signUpThroughUi(page, 'Ines Download', uniqueEmail('plan-dl'));
+  await expectSignedIn(page);
+  await call(page, 'POST', '/api/sites', { name: 'Larch Meadow', latitudeDeg: 46.93, longitudeDeg: 7.62, elevationM: 872, timeZone: 'Europe/Zurich' });
+  const made = await call(page, 'POST', '/api/recipes', { name: 'Download me', start: { kind: 'starter', targetIds: [] } });
+  await page.goto(`/recipes/${(made.json.recipe as Json).id}`);
+  await page.getByTestId('plan-export').click();
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('plan-export-download').click()]);
+  expect(download.suggestedFilename()).toMatch(/\.ya?ml$/);
+  const fs = await import('node:fs/promises');
+  const text = await fs.readFile((await download.path())!, 'utf8');
+  expect(text.startsWith('#') || text.startsWith('format:')).toBe(true);
+  expect(text).toContain('format: nightloom.plan/1');
+  expect(text).toContain('name: Download me');
+});
