@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { toNodeHandler } from 'better-auth/node';
+import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import type { Database } from '@/db/client';
@@ -48,6 +49,9 @@ export function createApp({ env, db, auth }: AppDeps): Express {
       },
     }),
   );
+
+  // gzip for the bundle, JSON and plans; event streams stay unbuffered.
+  app.use(compression({ filter: (req, res) => !String(res.getHeader('Content-Type') ?? '').startsWith('text/event-stream') && compression.filter(req, res) }));
 
   // better-auth reads its own bodies: mount it before express.json(). Its rate limiter keys on
   // the client address that Express resolved (trusting only a proxy on loopback).

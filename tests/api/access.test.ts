@@ -61,3 +61,13 @@ describe('clubs and roles (organization plugin)', () => {
     expect(memberInvite.status).toBe(403);
   });
 });
+
+describe('compression', () => {
+  it('gzips JSON answers when the client accepts it', async () => {
+    const u = await signUp(h);
+    for (let i = 0; i < 3; i += 1) await u.agent.post('/api/sites').set('Origin', ORIGIN).send({ name: `Compressed site ${i} with a fairly long name to pass the size threshold`, latitudeDeg: 46.9, longitudeDeg: 7.6, elevationM: 870, timeZone: 'Europe/Zurich' });
+    const res = await u.agent.get('/api/tonight').set('Accept-Encoding', 'gzip');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBe('gzip');
+  });
+});
