@@ -89,7 +89,7 @@ export const exposeStepSchema = z.object({
   gain: gainSchema.optional(),
   offset: offsetSchema.optional(),
   binning: binningSchema.default(D.expose.binning),
-  /** Dither after every n-th frame; 0 = never. */
+  /** Frames between dithers (a dither every n-th frame); 0 = never. */
   ditherEvery: whole('Dither every', 'frames', 0, 1000).default(D.expose.ditherEvery),
   frameType: z.literal('light', { error: 'Frame type is light' }).default('light'),
 });
