@@ -209,3 +209,62 @@ export const dryRun = pgTable(
   },
   (t) => [index('dry_run_recipe_created_idx').on(t.recipeId, t.createdAt)],
 );
+
+/**
+ * A recipe template shared in a club. Its versions are immutable snapshots (clubTemplateVersion);
+ * `latestVersion` is the newest one. Retired templates are hidden from plain members.
+ */
+export const clubTemplate = pgTable(
+  'club_template',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    clubId: text().notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    title: text().notNull(),
+    description: text().notNull().default(''),
+    tags: jsonb().$type<string[]>().notNull().default([]),
+    latestVersion: integer().notNull().default(1),
+    retiredAt: timestamp({ withTimezone: true }),
+    createdBy: text().references(() => user.id, { onDelete: 'set null' }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('club_template_club_id_idx').on(t.clubId)],
+);
+
+/** One immutable version of a template: a rig-agnostic tree (filters by band) and a changelog. */
+export const clubTemplateVersion = pgTable(
+  'club_template_version',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    templateId: uuid().notNull().references(() => clubTemplate.id, { onDelete: 'cascade' }),
+    version: integer().notNull(),
+    changelog: text().notNull().default(''),
+    tree: jsonb().$type<unknown>().notNull(),
+    bands: jsonb().$type<string[]>().notNull().default([]),
+    suggestedTargets: jsonb().$type<Record<string, unknown>>().notNull().default({}),
+    createdBy: text().references(() => user.id, { onDelete: 'set null' }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('club_template_version_idx').on(t.templateId, t.version)],
+);
+
+/** A member took a template version into their recipes. */
+export const templateUse = pgTable(
+  'template_use',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    templateId: uuid().notNull().references(() => clubTemplate.id, { onDelete: 'cascade' }),
+    version: integer().notNull(),
+    userId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    recipeId: uuid().references(() => recipe.id, { onDelete: 'set null' }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('template_use_template_idx').on(t.templateId), index('template_use_recipe_idx').on(t.recipeId)],
+);
+
+/** Per-user preferences (a row appears on first change; absent means the defaults). */
+export const userSettings = pgTable('user_settings', {
+  userId: text().primaryKey().references(() => user.id, { onDelete: 'cascade' }),
+  notifyTemplateVersions: boolean().notNull().default(true),
+  updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});

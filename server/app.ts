@@ -8,7 +8,10 @@ import type { Database } from '@/db/client';
 import { CLIENT_IP_HEADER, type Auth } from './auth';
 import type { Env } from './env';
 import { apiNotFound, errorHandler } from './errors';
+import { createMailer, type Mailer } from './mail/mailer';
 import { requireSameOrigin, requireSession, requireSiteAdmin } from './middleware/session';
+import { accountRouter } from './routes/account';
+import { clubsRouter } from './routes/clubs';
 import { devMailRouter } from './routes/dev-mail';
 import { healthRouter } from './routes/health';
 import { catalogueSearchRouter } from './routes/catalogue-search';
@@ -20,6 +23,8 @@ import { recipesRouter } from './routes/recipes';
 import { rigsRouter } from './routes/rigs';
 import { sitesRouter } from './routes/sites';
 import { targetsRouter } from './routes/targets';
+import { recipeTemplateRouter } from './routes/template-origin';
+import { templatesRouter } from './routes/templates';
 import { tonightRouter } from './routes/tonight';
 import { visibilityRouter } from './routes/visibility';
 
@@ -27,10 +32,13 @@ export interface AppDeps {
   env: Env;
   db: Database;
   auth: Auth;
+  /** Mail for the app's own routes; by default one to the env's SMTP server. */
+  mailer?: Mailer;
 }
 
 /** Builds the Express app: better-auth, the JSON API, then the exported web build. */
-export function createApp({ env, db, auth }: AppDeps): Express {
+export function createApp({ env, db, auth, mailer }: AppDeps): Express {
+  const mail = mailer ?? createMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -67,10 +75,13 @@ export function createApp({ env, db, auth }: AppDeps): Express {
   const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
   app.use('/api/sites', session, sameOrigin, sitesRouter(db));
   app.use('/api/rigs', session, sameOrigin, rigsRouter(db));
-  app.use('/api/recipes', session, sameOrigin, recipeDryRunsRouter(db), recipePlanRouter(db), recipesRouter(db));
+  app.use('/api/recipes', session, sameOrigin, recipeDryRunsRouter(db), recipePlanRouter(db), recipeTemplateRouter(db), recipesRouter(db));
   app.use('/api/plans', session, sameOrigin, plansRouter(db));
   app.use('/api/dry-runs', session, sameOrigin, treeDryRunRouter(db));
   app.use('/api/targets', session, sameOrigin, targetsRouter(db));
+  app.use('/api/clubs/:clubId/templates', session, sameOrigin, templatesRouter(db, mail, env.BASE_URL));
+  app.use('/api/clubs', session, sameOrigin, clubsRouter(db));
+  app.use('/api/account', session, sameOrigin, accountRouter(db));
   app.use('/api/catalogues', session, sameOrigin, cataloguesRouter(db));
   app.use('/api/catalogue', session, catalogueSearchRouter(db));
   app.use('/api/fits', session, sameOrigin, fitsRouter());

@@ -1,4 +1,5 @@
 import { betterAuth } from 'better-auth';
+import { eq } from 'drizzle-orm';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import { admin, organization } from 'better-auth/plugins';
 import type { Database } from '@/db/client';
@@ -66,6 +67,17 @@ export function createAuth(env: Env, db: Database, mailer: Mailer) {
           await mailer.send(
             actionMail(email, `Join ${club.name} on Nightloom`, `${inviter.user.name} invites you to the club ${club.name} on Nightloom.`, 'Open the invitation', url),
           );
+        },
+        organizationHooks: {
+          // Tell the inviter; a failed send must not undo the membership, so it is only logged.
+          afterAcceptInvitation: async ({ invitation, user: joined, organization: club }) => {
+            const [inviter] = await db.select({ email: schema.user.email }).from(schema.user).where(eq(schema.user.id, invitation.inviterId));
+            if (!inviter) return;
+            const url = `${env.BASE_URL}/clubs/${club.id}`;
+            await mailer
+              .send(actionMail(inviter.email, `${joined.name} joined ${club.name}`, `${joined.name} (${joined.email}) accepted your invitation and is now a member of ${club.name}.`, 'Open the club', url))
+              .catch((err: unknown) => console.error('[mail] invitation accepted:', err));
+          },
         },
       }),
     ],

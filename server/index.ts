@@ -8,7 +8,7 @@ import { createMailer } from './mail/mailer';
 const env = loadEnv();
 const db = createDatabase(env.DATABASE_URL);
 const mailer = createMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
-const app = createApp({ env, db, auth: createAuth(env, db, mailer) });
+const app = createApp({ env, db, auth: createAuth(env, db, mailer), mailer });
 
 const server = app.listen(env.PORT, env.HOST, (err?: Error) => {
   // Express 5 hands listen errors such as EADDRINUSE to this callback.
