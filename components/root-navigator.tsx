@@ -40,6 +40,7 @@ export function RootNavigator({ fontsReady }: { fontsReady: boolean }) {
         <Stack.Screen name="(auth)" />
       </Stack.Protected>
       <Stack.Screen name="reset-password" />
+      <Stack.Screen name="invitations/[id]" />
       <Stack.Screen name="+not-found" />
     </Stack>
   );

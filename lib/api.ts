@@ -92,6 +92,7 @@ export const api = {
   get: <T>(path: string, signal?: AbortSignal) => request<T>('GET', path, undefined, signal),
   post: <T>(path: string, body: unknown) => request<T>('POST', path, body),
   put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
+  patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
   del: <T = void>(path: string) => request<T>('DELETE', path),
   /** PUT a text body (e.g. `text/csv`) as is; the answer is JSON as usual. */
   putText: <T>(path: string, text: string, contentType: string) => request<T>('PUT', path, new RawBody(text, contentType)),

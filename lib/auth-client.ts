@@ -21,3 +21,9 @@ export function resetPasswordRedirectUrl(): string {
 export function refreshSession(): void {
   authClient.$store.notify('$sessionSignal');
 }
+
+/** A `next` parameter to return to after signing in or up: same-site paths only. */
+export function nextPathOf(next: string | string[] | undefined): string | null {
+  const value = Array.isArray(next) ? next[0] : next;
+  return value && value.startsWith('/') && !value.startsWith('//') ? value : null;
+}

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { TemplateMailSetting } from '@/components/templates/template-mail-setting';
 import { AppText } from '@/components/ui/app-text';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -73,6 +74,12 @@ export function AccountScreen() {
           onValueChange={setNightView}
           testID="night-view-switch"
         />
+      </Card>
+      <Card>
+        <AppText eyebrow tone="faint" weight="semibold">
+          Club mail
+        </AppText>
+        <TemplateMailSetting />
       </Card>
       <View style={styles.signOut}>
         {failure ? <AppText tone="danger">{failure}</AppText> : null}

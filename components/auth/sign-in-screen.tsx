@@ -1,3 +1,4 @@
+import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
@@ -9,7 +10,7 @@ import { TextField } from '@/components/ui/text-field';
 import { TextLink } from '@/components/ui/text-link';
 import { AppText } from '@/components/ui/app-text';
 import { useZodForm } from '@/hooks/use-zod-form';
-import { authClient } from '@/lib/auth-client';
+import { authClient, nextPathOf } from '@/lib/auth-client';
 import { cleanError } from '@/lib/clean-error';
 import { spacing } from '@/constants/theme';
 
@@ -21,6 +22,8 @@ const signInSchema = z.object({
 /** E-mail and password sign-in; the root guard moves to Tonight once the session exists. */
 export function SignInScreen() {
   const form = useZodForm({ schema: signInSchema, initial: { email: '', password: '' } });
+  // Where to go once signed in, e.g. back to an e-mailed club invitation.
+  const next = nextPathOf(useLocalSearchParams<{ next?: string }>().next);
   const [pending, setPending] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
 
@@ -32,6 +35,7 @@ export function SignInScreen() {
     try {
       const { error } = await authClient.signIn.email({ email: input.email.trim(), password: input.password });
       if (error) setFailure(error.status === 401 ? 'That e-mail and password do not match an account.' : cleanError(error));
+      else if (next) router.replace(next);
     } catch (e) {
       setFailure(cleanError(e));
     } finally {
@@ -46,7 +50,7 @@ export function SignInScreen() {
       footer={
         <View style={styles.footerRow}>
           <AppText tone="muted">New to Nightloom?</AppText>
-          <TextLink href="/sign-up" label="Create an account" testID="link-sign-up" />
+          <TextLink href={next ? `/sign-up?next=${encodeURIComponent(next)}` : '/sign-up'} label="Create an account" testID="link-sign-up" />
         </View>
       }
     >

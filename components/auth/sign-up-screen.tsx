@@ -1,3 +1,4 @@
+import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
@@ -9,7 +10,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { TextLink } from '@/components/ui/text-link';
 import { useZodForm } from '@/hooks/use-zod-form';
-import { authClient, MIN_PASSWORD_LENGTH } from '@/lib/auth-client';
+import { authClient, nextPathOf, MIN_PASSWORD_LENGTH } from '@/lib/auth-client';
 import { cleanError } from '@/lib/clean-error';
 import { spacing } from '@/constants/theme';
 
@@ -22,6 +23,8 @@ const signUpSchema = z.object({
 /** Account creation. better-auth signs the new user in, and the root guard takes over. */
 export function SignUpScreen() {
   const form = useZodForm({ schema: signUpSchema, initial: { name: '', email: '', password: '' } });
+  // Where to go once signed in, e.g. back to an e-mailed club invitation.
+  const next = nextPathOf(useLocalSearchParams<{ next?: string }>().next);
   const [pending, setPending] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
   const [needsVerification, setNeedsVerification] = useState(false);
@@ -35,6 +38,7 @@ export function SignUpScreen() {
       const { data, error } = await authClient.signUp.email({ name: input.name, email: input.email.trim(), password: input.password });
       if (error) setFailure(cleanError(error));
       else if (data && !data.token) setNeedsVerification(true);
+      else if (next) router.replace(next);
     } catch (e) {
       setFailure(cleanError(e));
     } finally {
@@ -49,7 +53,7 @@ export function SignUpScreen() {
       footer={
         <View style={styles.footerRow}>
           <AppText tone="muted">Already have an account?</AppText>
-          <TextLink href="/sign-in" label="Sign in" testID="link-sign-in" />
+          <TextLink href={next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'} label="Sign in" testID="link-sign-in" />
         </View>
       }
     >

@@ -1,6 +1,6 @@
 import Svg, { Circle, Path, Rect } from 'react-native-svg';
 
-export type NavIconName = 'tonight' | 'recipes' | 'targets' | 'setup' | 'sites' | 'rig' | 'account' | 'mail' | 'more';
+export type NavIconName = 'tonight' | 'recipes' | 'targets' | 'setup' | 'sites' | 'rig' | 'club' | 'account' | 'mail' | 'more';
 
 type IconProps = { name: NavIconName; color: string; size?: number };
 
@@ -53,6 +53,16 @@ export function NavIcon({ name, color, size = 22 }: IconProps) {
         <>
           <Circle cx={12} cy={8.5} r={3.6} {...stroke} />
           <Path d="M4.5 20c1.3-3.6 4.1-5.3 7.5-5.3s6.2 1.7 7.5 5.3" {...stroke} />
+        </>
+      ) : null}
+      {name === 'club' ? (
+        <>
+          {/* Three heads under one small star: people who image together. */}
+          <Circle cx={7} cy={11} r={2.3} {...stroke} />
+          <Circle cx={17} cy={11} r={2.3} {...stroke} />
+          <Circle cx={12} cy={9.5} r={2.6} {...stroke} />
+          <Path d="M2.5 20c.7-2.6 2.3-4 4.5-4M21.5 20c-.7-2.6-2.3-4-4.5-4M7.5 20.5c.8-3.2 2.4-4.7 4.5-4.7s3.7 1.5 4.5 4.7" {...stroke} />
+          <Path d="M12 2.5v2.4M10.8 3.7h2.4" {...stroke} />
         </>
       ) : null}
       {name === 'mail' ? (

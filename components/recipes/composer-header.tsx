@@ -5,6 +5,7 @@ import { PlanExportButton } from '@/components/plans/plan-export-button';
 import { ComposerIcon } from '@/components/recipes/composer-icons';
 import { IconButton } from '@/components/recipes/icon-button';
 import { SavePill } from '@/components/recipes/save-pill';
+import { PublishToClubButton, TemplateNewerNotice } from '@/components/templates/composer-template-bits';
 import { AppText } from '@/components/ui/app-text';
 import { Button } from '@/components/ui/button';
 import type { WebPressState } from '@/components/ui/pressable-state';
@@ -99,6 +100,7 @@ export function ComposerHeader(p: ComposerHeaderProps) {
     <View style={styles.tools}>
       <Button label="Dry run" size="small" variant="secondary" onPress={p.onDryRun} disabled={p.saveState !== 'saved'} accessibilityLabel="Dry run (once saved)" testID="composer-dry-run" />
       <PlanExportButton recipeId={p.recipeId} recipeName={p.name} />
+      <PublishToClubButton recipeId={p.recipeId} disabled={p.saveState !== 'saved'} />
     </View>
   );
   const tools = (
@@ -147,6 +149,7 @@ export function ComposerHeader(p: ComposerHeaderProps) {
         </View>
       )}
       {pickers}
+      <TemplateNewerNotice recipeId={p.recipeId} />
     </View>
   );
 }

@@ -26,7 +26,7 @@ export async function signInThroughUi(page: Page, email: string, password = PASS
   await page.getByTestId('sign-in-submit').click();
 }
 
-export type Section = 'tonight' | 'targets' | 'setup' | 'account' | 'mail';
+export type Section = 'tonight' | 'targets' | 'setup' | 'club' | 'account' | 'mail';
 
 /**
  * Opens a section from the tab bar (phone) or side rail (wide): both carry the same testIDs.
