@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { RigSitePickers } from '@/components/templates/rig-site-pickers';
+import { chosenTargets, TemplateTargetPickers } from '@/components/templates/template-target-pickers';
 import { AppText } from '@/components/ui/app-text';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -10,6 +11,7 @@ import { FormSection } from '@/components/ui/form-section';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useRigsQuery } from '@/hooks/use-rigs';
+import { useTargetsQuery } from '@/hooks/use-targets';
 import { unmappedBandsOf, useUseTemplateMutation, type TemplateDetail } from '@/hooks/use-templates';
 import { cleanError } from '@/lib/clean-error';
 import { spacing } from '@/constants/theme';
@@ -17,6 +19,8 @@ import { spacing } from '@/constants/theme';
 /** "Use this template": a copy in my recipes on my rig; bands without a filter are asked for. */
 export function TemplateUseForm({ template }: { template: TemplateDetail }) {
   const rigs = useRigsQuery();
+  const targets = useTargetsQuery();
+  const [targetPicks, setTargetPicks] = useState<Record<string, string | null>>({});
   const [open, setOpen] = useState(false);
   const [rigId, setRigId] = useState('');
   const [name, setName] = useState(template.title);
@@ -31,7 +35,8 @@ export function TemplateUseForm({ template }: { template: TemplateDetail }) {
   function confirm() {
     if (!rigId) return;
     const map = unmapped ? bandMap : undefined;
-    use.mutate({ rigId, name: name.trim() || undefined, bandMap: map }, { onSuccess: (recipe) => router.push({ pathname: '/recipes/[id]', params: { id: recipe.id } }), onError: (e) => setUnmapped(unmappedBandsOf(e) ?? unmapped) });
+    const targetIds = chosenTargets(template.tree, template.suggestedTargets, targetPicks, targets.data ?? []);
+    use.mutate({ rigId, name: name.trim() || undefined, bandMap: map, targetIds }, { onSuccess: (recipe) => router.push({ pathname: '/recipes/[id]', params: { id: recipe.id } }), onError: (e) => setUnmapped(unmappedBandsOf(e) ?? unmapped) });
   }
 
   if (!open) {
@@ -46,6 +51,7 @@ export function TemplateUseForm({ template }: { template: TemplateDetail }) {
     <FormSection title="Use this template" description={`Version ${template.latestVersion} becomes a recipe of yours; later versions do not change it.`} testID="template-use-form">
       <RigSitePickers rigId={rigId} onRig={(id) => (setRigId(id), setBandMap({}), setUnmapped(null), use.reset())} rigTestID="template-use-rig" />
       <TextField label="Recipe name" value={name} onChangeText={setName} maxLength={80} testID="template-use-name" />
+      <TemplateTargetPickers tree={template.tree} suggested={template.suggestedTargets} value={targetPicks} onChange={setTargetPicks} />
       {unmapped ? (
         <View style={styles.bands} testID="template-bands">
           <AppText tone="muted">Your rig has no filter for these bands. Pick the one to use for each:</AppText>

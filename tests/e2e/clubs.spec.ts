@@ -19,7 +19,9 @@ async function api<T>(page: Page, method: string, path: string, body?: unknown):
   );
 }
 
-type Node = { kind: string; filter?: string; children?: Node[] };
+const VEIL = { designation: 'NGC 6992', name: 'Eastern Veil', type: 'supernova-remnant', raDeg: 314.0, decDeg: 31.7, majorArcmin: 60 };
+
+type Node = { kind: string; filter?: string; targetId?: string | null; children?: Node[] };
 const exposeFilters = (nodes: Node[]): string[] => nodes.flatMap((n) => (n.kind === 'expose' && n.filter ? [n.filter] : exposeFilters(n.children ?? [])));
 
 test('an owner shares a template; an invited newcomer joins by e-mail and uses it on their own rig', async ({ browser }, info) => {
@@ -39,7 +41,9 @@ test('an owner shares a template; an invited newcomer joins by e-mail and uses i
     filterWheel: { slots: [{ name: 'Astro Ha', band: 'Ha' }, { name: 'Astro OIII', band: 'OIII' }] },
   });
   expect(rig.status).toBe(201);
-  const recipe = await api<{ recipe: { id: string } }>(owner, 'POST', '/api/recipes', { name: 'Veil bicolour', rigId: rig.body.rig.id, start: { kind: 'starter', targetIds: [] } });
+  // NGC 6992, approximate J2000 centre of the Eastern Veil (from memory; any position serves here).
+  const veil = await api<{ target: { id: string } }>(owner, 'POST', '/api/targets', VEIL);
+  const recipe = await api<{ recipe: { id: string } }>(owner, 'POST', '/api/recipes', { name: 'Veil bicolour', rigId: rig.body.rig.id, start: { kind: 'starter', targetIds: [veil.body.target.id] } });
   expect(recipe.status).toBe(201);
   await owner.reload();
   await openSection(owner, 'club');
@@ -102,6 +106,8 @@ test('an owner shares a template; an invited newcomer joins by e-mail and uses i
     filterWheel: { slots: [{ name: 'Ha 7nm', band: 'Ha' }, { name: 'Teal 3nm', band: 'custom' }] },
   });
   expect(ownRig.status).toBe(201);
+  // The same object on their own list: the template's suggested target is preselected.
+  const ownVeil = await api<{ target: { id: string } }>(newcomer, 'POST', '/api/targets', VEIL);
   await newcomer.reload();
   await newcomer.getByTestId('template-card-veil-bicolour').click();
   await newcomer.getByTestId('template-use').click();
@@ -115,6 +121,8 @@ test('an owner shares a template; an invited newcomer joins by e-mail and uses i
   const copy = await api<{ recipe: { rigId: string; tree: { children: Node[] } } }>(newcomer, 'GET', `/api/recipes/${copyId}`);
   expect(copy.body.recipe.rigId).toBe(ownRig.body.rig.id);
   expect(new Set(exposeFilters(copy.body.recipe.tree.children))).toEqual(new Set(['Ha 7nm', 'Teal 3nm']));
+  const stage = copy.body.recipe.tree.children.find((n) => n.kind === 'stage');
+  expect(stage?.targetId).toBe(ownVeil.body.target.id);
 
   // It is in their recipes.
   await newcomer.getByTestId('nav-recipes').click();
