@@ -12,7 +12,7 @@ export const CLUB_ROLES: readonly ClubRole[] = ['member', 'admin', 'owner'];
 
 export type ClubSummary = ClubListItem;
 /** better-auth's member row id is looked up when our club API does not send it. */
-export type ClubMember = ApiClubMember & { memberId?: string };
+export type ClubMember = ApiClubMember;
 export type { ClubInvitation, TemplateSummary };
 export interface ClubDetail extends Omit<ApiClubDetail, 'members'> {
   members: ClubMember[];
@@ -91,14 +91,11 @@ export function useClubPeopleMutations(clubId: string) {
     onSettled: invalidate,
   });
   const changeRole = useMutation({
-    mutationFn: async ({ member, role }: { member: ClubMember; role: ClubRole }) => {
-      const memberId = member.memberId ?? (await memberIdOf(organizationId, member.userId));
-      return unwrapAuth(authClient.organization.updateMemberRole({ memberId, role, organizationId }));
-    },
+    mutationFn: ({ member, role }: { member: ClubMember; role: ClubRole }) => unwrapAuth(authClient.organization.updateMemberRole({ memberId: member.memberId, role, organizationId })),
     onSettled: invalidate,
   });
   const remove = useMutation({
-    mutationFn: (member: ClubMember) => unwrapAuth(authClient.organization.removeMember({ memberIdOrEmail: member.memberId ?? member.email, organizationId })),
+    mutationFn: (member: ClubMember) => unwrapAuth(authClient.organization.removeMember({ memberIdOrEmail: member.memberId, organizationId })),
     onSettled: invalidate,
   });
   const leave = useMutation({
@@ -106,14 +103,6 @@ export function useClubPeopleMutations(clubId: string) {
     onSettled: invalidate,
   });
   return { invite, revoke, changeRole, remove, leave };
-}
-
-/** better-auth's member id for a user, when our club API did not send it. */
-async function memberIdOf(organizationId: string, userId: string): Promise<string> {
-  const full = await unwrapAuth(authClient.organization.getFullOrganization({ query: { organizationId } }));
-  const member = full?.members.find((m) => m.userId === userId);
-  if (!member) throw new ApiError(404, 'not-found', 'That member is no longer in the club.', undefined, undefined);
-  return member.id;
 }
 
 export interface InvitationView {

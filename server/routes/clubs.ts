@@ -43,7 +43,7 @@ export function clubsRouter(db: Database): Router {
     const manager = isClubManager(myRoles);
     const [club] = await db.select({ id: organization.id, name: organization.name, slug: organization.slug }).from(organization).where(eq(organization.id, clubId));
     const members = await db
-      .select({ userId: member.userId, name: user.name, email: user.email, role: member.role, joinedAt: member.createdAt })
+      .select({ memberId: member.id, userId: member.userId, name: user.name, email: user.email, role: member.role, joinedAt: member.createdAt })
       .from(member)
       .innerJoin(user, eq(user.id, member.userId))
       .where(eq(member.organizationId, clubId))
@@ -59,7 +59,7 @@ export function clubsRouter(db: Database): Router {
     const body: ClubDetail = {
       club: club!,
       myRoles,
-      members: members.map((m) => ({ userId: m.userId, name: m.name, email: m.email, roles: splitRoles(m.role), joinedAt: m.joinedAt.toISOString() })),
+      members: members.map((m) => ({ memberId: m.memberId, userId: m.userId, name: m.name, email: m.email, roles: splitRoles(m.role), joinedAt: m.joinedAt.toISOString() })),
       invitations: invitations.map((i) => ({ id: i.id, email: i.email, role: i.role ?? 'member', status: i.status, expiresAt: i.expiresAt.toISOString() })),
       templates: await templateSummaries(db, clubId, { withRetired: manager }),
     };

@@ -66,6 +66,8 @@ export interface ClubListItem {
 }
 
 export interface ClubMember {
+  /** better-auth's membership id (what role changes and removals take). */
+  memberId: string;
   userId: string;
   name: string;
   email: string;

@@ -60,6 +60,8 @@ describe('club management through better-auth', () => {
     expect(page.status).toBe(200);
     const members = await c.owner.agent.get(`/api/auth/organization/list-members?organizationId=${c.clubId}`);
     const adminMember = members.body.members.find((m: { userId: string }) => m.userId === c.admin.id);
+    // Our club page carries better-auth's membership id, so the client needs no second call.
+    expect(page.body.members.find((m: { userId: string }) => m.userId === c.admin.id).memberId).toBe(adminMember.id);
     const res = await post(c.member, '/api/auth/organization/update-member-role', { memberId: adminMember.id, role: 'member', organizationId: c.clubId });
     expect(res.status).toBe(403);
     expect((await c.admin.agent.get(`/api/clubs/${c.clubId}`)).body.myRoles).toEqual(['admin']);
