@@ -2,7 +2,10 @@
 import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import { createDatabase } from '@/db/client';
-import { framing, member, organization, rig, site, target, user } from '@/db/schema';
+import { framing, member, organization, recipe, recipeRevision, rig, site, target, user } from '@/db/schema';
+import { starterRecipe } from '@/shared/recipe/starters';
+import { countNodes } from '@/shared/recipe/tree';
+import { targetIds as treeTargetIds, totals } from '@/shared/recipe/summary';
 import { rigInputSchema } from '@/shared/rig/schema';
 import { findBuiltinTarget } from '@/shared/targets/builtin';
 import { createAuth } from '@/server/auth';
@@ -45,13 +48,31 @@ async function seedRigAndTargets(db: ReturnType<typeof createDatabase>, ownerId:
     const [created] = await db.insert(rig).values({ ownerId, name: spec.name, spec }).returning({ id: rig.id });
     rigId = created!.id;
   }
+  const targetRows: { id: string; name: string }[] = [];
   for (const demo of DEMO_TARGETS) {
     const [existing] = await db.select({ id: target.id }).from(target).where(and(eq(target.ownerId, ownerId), eq(target.designation, demo.designation)));
-    if (existing) continue;
+    if (existing) {
+      targetRows.push({ id: existing.id, name: demo.designation });
+      continue;
+    }
     const obj = findBuiltinTarget(demo.designation);
     if (!obj) throw new Error(`demo target ${demo.designation} is not in the built-in list`);
     const [t] = await db.insert(target).values({ ...obj, ownerId }).returning({ id: target.id });
     await db.insert(framing).values({ ...demo.framing, targetId: t!.id, rigId });
+    targetRows.push({ id: t!.id, name: demo.designation });
+  }
+  // A starter recipe over the first two targets, so the composer and the dry run have something to show.
+  const [r2] = await db.select({ id: recipe.id }).from(recipe).where(eq(recipe.ownerId, ownerId)).limit(1);
+  if (!r2) {
+    const [s2] = await db.select({ id: site.id }).from(site).where(eq(site.ownerId, ownerId)).limit(1);
+    const spec = (await db.select({ spec: rig.spec }).from(rig).where(eq(rig.id, rigId)))[0]!.spec;
+    const made = starterRecipe({ rig: spec, targets: targetRows.slice(0, 2), name: 'Autumn pair: Andromeda and the Wall' });
+    const tree = made.tree;
+    const [row] = await db
+      .insert(recipe)
+      .values({ ownerId, name: made.name, notes: '', rigId, siteId: s2?.id ?? null, tree, nodeCount: countNodes(tree), targetCount: treeTargetIds(tree).length, plannedExposureS: totals(tree).lightShutterS })
+      .returning();
+    await db.insert(recipeRevision).values({ recipeId: row!.id, version: 1, name: row!.name, notes: '', tree, nodeCount: row!.nodeCount });
   }
 }
 
