@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { TemplateCard } from '@/components/templates/template-card';
-import { Chip } from '@/components/targets/chip';
+import { Chip } from '@/components/ui/chip';
 import { AppText } from '@/components/ui/app-text';
 import { Button } from '@/components/ui/button';
 import { ErrorView } from '@/components/ui/error-view';

@@ -6,7 +6,7 @@ import { BestNights } from '@/components/dry-run/best-nights';
 import { DryRunHeader } from '@/components/dry-run/dry-run-header';
 import { NightView } from '@/components/dry-run/night-view';
 import { useDryRunView, type DryRunView } from '@/components/dry-run/use-dry-run-view';
-import { Segmented } from '@/components/targets/segmented';
+import { Segmented } from '@/components/ui/segmented';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorView } from '@/components/ui/error-view';

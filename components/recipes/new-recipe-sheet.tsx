@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { RecipeSourcePicker, type StartKind } from '@/components/recipes/recipe-source-picker';
 import { Sheet } from '@/components/recipes/sheet';
-import { Chip } from '@/components/targets/chip';
+import { Chip } from '@/components/ui/chip';
 import { designationSlug } from '@/components/targets/target-format';
 import { AppText } from '@/components/ui/app-text';
 import { Banner } from '@/components/ui/banner';

@@ -1,6 +1,6 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
 
-import { Chip } from '@/components/targets/chip';
+import { Chip } from '@/components/ui/chip';
 import type { FindFormState } from '@/components/targets/find-state';
 import { KIND_LABELS, KIND_ORDER } from '@/components/targets/kinds';
 import { AppText } from '@/components/ui/app-text';

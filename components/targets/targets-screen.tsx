@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { FindPanel } from '@/components/targets/find-panel';
 import { MyTargetsPanel } from '@/components/targets/my-targets-panel';
-import { Segmented } from '@/components/targets/segmented';
+import { Segmented } from '@/components/ui/segmented';
 import { AppText } from '@/components/ui/app-text';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { Chip } from '@/components/targets/chip';
+import { Chip } from '@/components/ui/chip';
 import { AppText } from '@/components/ui/app-text';
 import { TextField } from '@/components/ui/text-field';
 import { SUGGESTED_TAGS } from '@/hooks/use-templates';

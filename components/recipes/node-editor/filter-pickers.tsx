@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { filterChoices, listNames, presetChips, toggleName } from '@/components/recipes/node-editor/choices';
 import { DraftChoice, DraftText, FieldError, inputID } from '@/components/recipes/node-editor/editor-field';
 import type { NodeEditorState } from '@/components/recipes/node-editor/use-node-editor';
-import { Chip } from '@/components/targets/chip';
+import { Chip } from '@/components/ui/chip';
 import { AppText } from '@/components/ui/app-text';
 import { spacing } from '@/constants/theme';
 import type { RigInput } from '@/shared/rig/schema';
