@@ -6,6 +6,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { TextLink } from '@/components/ui/text-link';
+import { useAuthAction } from '@/hooks/use-auth-action';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { authClient, resetPasswordRedirectUrl } from '@/lib/auth-client';
 import { cleanError } from '@/lib/clean-error';
@@ -15,26 +16,20 @@ const forgotSchema = z.object({ email: z.email('Enter the e-mail address of your
 /** Asks for a reset link. The answer is the same whether or not the address has an account. */
 export function ForgotPasswordScreen() {
   const form = useZodForm({ schema: forgotSchema, initial: { email: '' } });
-  const [pending, setPending] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
+  const { pending, failure, run } = useAuthAction();
   const [sentTo, setSentTo] = useState<string | null>(null);
 
-  async function submit() {
+  function submit() {
     const input = form.validate();
     if (!input) return;
-    setPending(true);
-    setFailure(null);
-    try {
+    void run(async () => {
       const email = input.email.trim();
       const { error } = await authClient.requestPasswordReset({ email, redirectTo: resetPasswordRedirectUrl() });
-      if (error) setFailure(cleanError(error));
-      else setSentTo(email);
-    } catch (e) {
-      setFailure(cleanError(e));
-    } finally {
-      setPending(false);
-    }
+      if (error) return cleanError(error);
+      setSentTo(email);
+    });
   }
+
 
   return (
     <AuthFrame

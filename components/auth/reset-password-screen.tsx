@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { TextLink } from '@/components/ui/text-link';
 import { useSessionState } from '@/hooks/use-session';
+import { useAuthAction } from '@/hooks/use-auth-action';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { authClient, MIN_PASSWORD_LENGTH } from '@/lib/auth-client';
 import { cleanError } from '@/lib/clean-error';
@@ -33,26 +34,20 @@ export function ResetPasswordScreen() {
   const linkError = firstParam(params.error);
   const { session } = useSessionState();
   const form = useZodForm({ schema: resetSchema, initial: { password: '', repeat: '' } });
-  const [pending, setPending] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
+  const { pending, failure, run } = useAuthAction();
   const [done, setDone] = useState(false);
   const onward = session ? { href: '/', label: 'Back to Nightloom' } : { href: '/sign-in', label: 'Go to sign in' };
 
-  async function submit() {
+  function submit() {
     const input = form.validate();
     if (!input || !token) return;
-    setPending(true);
-    setFailure(null);
-    try {
+    void run(async () => {
       const { error } = await authClient.resetPassword({ newPassword: input.password, token });
-      if (error) setFailure(error.code === 'INVALID_TOKEN' ? 'This reset link is invalid or has expired. Ask for a new one.' : cleanError(error));
-      else setDone(true);
-    } catch (e) {
-      setFailure(cleanError(e));
-    } finally {
-      setPending(false);
-    }
+      if (error) return error.code === 'INVALID_TOKEN' ? 'This reset link is invalid or has expired. Ask for a new one.' : cleanError(error);
+      setDone(true);
+    });
   }
+
 
   if (linkError || !token) {
     return (

@@ -1,5 +1,4 @@
 import { router, useLocalSearchParams } from 'expo-router';
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
 
@@ -9,6 +8,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { TextLink } from '@/components/ui/text-link';
 import { AppText } from '@/components/ui/app-text';
+import { useAuthAction } from '@/hooks/use-auth-action';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { authClient, nextPathOf } from '@/lib/auth-client';
 import { cleanError } from '@/lib/clean-error';
@@ -24,24 +24,18 @@ export function SignInScreen() {
   const form = useZodForm({ schema: signInSchema, initial: { email: '', password: '' } });
   // Where to go once signed in, e.g. back to an e-mailed club invitation.
   const next = nextPathOf(useLocalSearchParams<{ next?: string }>().next);
-  const [pending, setPending] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
+  const { pending, failure, run } = useAuthAction();
 
-  async function submit() {
+  function submit() {
     const input = form.validate();
     if (!input) return;
-    setPending(true);
-    setFailure(null);
-    try {
+    void run(async () => {
       const { error } = await authClient.signIn.email({ email: input.email.trim(), password: input.password });
-      if (error) setFailure(error.status === 401 ? 'That e-mail and password do not match an account.' : cleanError(error));
-      else if (next) router.replace(next);
-    } catch (e) {
-      setFailure(cleanError(e));
-    } finally {
-      setPending(false);
-    }
+      if (error) return error.status === 401 ? 'That e-mail and password do not match an account.' : cleanError(error);
+      if (next) router.replace(next);
+    });
   }
+
 
   return (
     <AuthFrame

@@ -9,6 +9,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { TextLink } from '@/components/ui/text-link';
+import { useAuthAction } from '@/hooks/use-auth-action';
 import { useZodForm } from '@/hooks/use-zod-form';
 import { authClient, nextPathOf, MIN_PASSWORD_LENGTH } from '@/lib/auth-client';
 import { cleanError } from '@/lib/clean-error';
@@ -25,26 +26,20 @@ export function SignUpScreen() {
   const form = useZodForm({ schema: signUpSchema, initial: { name: '', email: '', password: '' } });
   // Where to go once signed in, e.g. back to an e-mailed club invitation.
   const next = nextPathOf(useLocalSearchParams<{ next?: string }>().next);
-  const [pending, setPending] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
+  const { pending, failure, run } = useAuthAction();
   const [needsVerification, setNeedsVerification] = useState(false);
 
-  async function submit() {
+  function submit() {
     const input = form.validate();
     if (!input) return;
-    setPending(true);
-    setFailure(null);
-    try {
+    void run(async () => {
       const { data, error } = await authClient.signUp.email({ name: input.name, email: input.email.trim(), password: input.password });
-      if (error) setFailure(cleanError(error));
-      else if (data && !data.token) setNeedsVerification(true);
+      if (error) return cleanError(error);
+      if (data && !data.token) setNeedsVerification(true);
       else if (next) router.replace(next);
-    } catch (e) {
-      setFailure(cleanError(e));
-    } finally {
-      setPending(false);
-    }
+    });
   }
+
 
   return (
     <AuthFrame
