@@ -68,5 +68,15 @@ export function useZodForm<V extends Values, S extends z.ZodType>({ schema, init
     setServerErrors({});
   }
 
-  return { values, setField, blur, errorFor, validate, reset, setServerErrors, isValid: parsed.success };
+  /** The props a text input needs for a string field: value, change, blur and its error. */
+  function textField<K extends keyof V & string>(field: K) {
+    return {
+      value: String(values[field] ?? ''),
+      onChangeText: (v: string) => setField(field, v as V[K]),
+      onBlur: () => blur(field),
+      error: errorFor(field),
+    };
+  }
+
+  return { values, setField, blur, errorFor, textField, validate, reset, setServerErrors, isValid: parsed.success };
 }

@@ -48,10 +48,7 @@ export function ForgotPasswordScreen() {
       {failure ? <Banner tone="danger" title="Could not send the link" message={failure} /> : null}
       <TextField
         label="Email"
-        value={form.values.email}
-        onChangeText={(v) => form.setField('email', v)}
-        onBlur={() => form.blur('email')}
-        error={form.errorFor('email')}
+        {...form.textField('email')}
         autoComplete="email"
         inputMode="email"
         autoCapitalize="none"

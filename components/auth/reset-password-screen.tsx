@@ -77,20 +77,14 @@ export function ResetPasswordScreen() {
       <TextField
         label="New password"
         hint={`At least ${MIN_PASSWORD_LENGTH} characters.`}
-        value={form.values.password}
-        onChangeText={(v) => form.setField('password', v)}
-        onBlur={() => form.blur('password')}
-        error={form.errorFor('password')}
+        {...form.textField('password')}
         secureTextEntry
         autoComplete="new-password"
         testID="reset-password"
       />
       <TextField
         label="Repeat new password"
-        value={form.values.repeat}
-        onChangeText={(v) => form.setField('repeat', v)}
-        onBlur={() => form.blur('repeat')}
-        error={form.errorFor('repeat')}
+        {...form.textField('repeat')}
         secureTextEntry
         autoComplete="new-password"
         onSubmitEditing={submit}

@@ -51,10 +51,7 @@ export function SignInScreen() {
       {failure ? <Banner tone="danger" title="Could not sign in" message={failure} testID="sign-in-error" /> : null}
       <TextField
         label="Email"
-        value={form.values.email}
-        onChangeText={(v) => form.setField('email', v)}
-        onBlur={() => form.blur('email')}
-        error={form.errorFor('email')}
+        {...form.textField('email')}
         autoComplete="email"
         inputMode="email"
         autoCapitalize="none"
@@ -62,10 +59,7 @@ export function SignInScreen() {
       />
       <TextField
         label="Password"
-        value={form.values.password}
-        onChangeText={(v) => form.setField('password', v)}
-        onBlur={() => form.blur('password')}
-        error={form.errorFor('password')}
+        {...form.textField('password')}
         secureTextEntry
         autoComplete="current-password"
         onSubmitEditing={submit}

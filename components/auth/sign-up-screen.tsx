@@ -58,19 +58,13 @@ export function SignUpScreen() {
       {failure ? <Banner tone="danger" title="Could not create the account" message={failure} testID="sign-up-error" /> : null}
       <TextField
         label="Name"
-        value={form.values.name}
-        onChangeText={(v) => form.setField('name', v)}
-        onBlur={() => form.blur('name')}
-        error={form.errorFor('name')}
+        {...form.textField('name')}
         autoComplete="name"
         testID="sign-up-name"
       />
       <TextField
         label="Email"
-        value={form.values.email}
-        onChangeText={(v) => form.setField('email', v)}
-        onBlur={() => form.blur('email')}
-        error={form.errorFor('email')}
+        {...form.textField('email')}
         autoComplete="email"
         inputMode="email"
         autoCapitalize="none"
@@ -79,10 +73,7 @@ export function SignUpScreen() {
       <TextField
         label="Password"
         hint={`At least ${MIN_PASSWORD_LENGTH} characters.`}
-        value={form.values.password}
-        onChangeText={(v) => form.setField('password', v)}
-        onBlur={() => form.blur('password')}
-        error={form.errorFor('password')}
+        {...form.textField('password')}
         secureTextEntry
         autoComplete="new-password"
         onSubmitEditing={submit}
