@@ -2,8 +2,9 @@ import { forwardRef } from 'react';
 import { StyleSheet, TextInput, type TextInputProps } from 'react-native';
 
 import { useTheme } from '@/components/theme-provider';
+import { inputSurface } from '@/components/ui/input-style';
 import { useThemedStyles } from '@/hooks/use-themed-styles';
-import { fonts, radii, spacing, typeScale, type Palette } from '@/constants/theme';
+import { radii, spacing, type Palette } from '@/constants/theme';
 
 type CellInputProps = Omit<TextInputProps, 'style'> & {
   /** The column header this cell sits under: its visible label and accessible name. */
@@ -40,18 +41,12 @@ export const CellInput = forwardRef<TextInput, CellInputProps>(function CellInpu
 const makeStyles = (c: Palette) =>
   StyleSheet.create({
     input: {
-      ...typeScale.body,
-      fontFamily: fonts.regular,
-      color: c.text,
-      backgroundColor: c.surface,
-      borderWidth: 1,
-      borderColor: c.borderStrong,
+      ...inputSurface(c),
       borderRadius: radii.sm,
       paddingHorizontal: spacing.sm,
       paddingVertical: spacing.xs + 2,
       minHeight: 40,
       minWidth: 0,
-      outlineColor: c.accent,
     },
     numeric: { fontVariant: ['tabular-nums'] },
     invalid: { borderColor: c.danger },

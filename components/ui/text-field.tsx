@@ -3,8 +3,9 @@ import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 
 import { AppText } from '@/components/ui/app-text';
 import { useTheme } from '@/components/theme-provider';
+import { inputSurface } from '@/components/ui/input-style';
 import { useThemedStyles } from '@/hooks/use-themed-styles';
-import { fonts, radii, spacing, typeScale, type Palette } from '@/constants/theme';
+import { radii, spacing, type Palette } from '@/constants/theme';
 
 type TextFieldProps = Omit<TextInputProps, 'style'> & {
   label: string;
@@ -49,17 +50,11 @@ const makeStyles = (c: Palette) =>
   StyleSheet.create({
     field: { gap: spacing.xs + 2 },
     input: {
-      ...typeScale.body,
-      fontFamily: fonts.regular,
-      color: c.text,
-      backgroundColor: c.surface,
-      borderWidth: 1,
-      borderColor: c.borderStrong,
+      ...inputSurface(c),
       borderRadius: radii.md,
       paddingHorizontal: spacing.md,
       paddingVertical: spacing.sm + 2,
       minHeight: 44,
-      outlineColor: c.accent,
     },
     inputError: { borderColor: c.danger },
     tabular: { fontVariant: ['tabular-nums'] },

@@ -8,8 +8,9 @@ import { ChoiceGroup } from '@/components/ui/choice-group';
 import { SelectField } from '@/components/ui/select-field';
 import { SwitchRow } from '@/components/ui/switch-row';
 import { useTheme } from '@/components/theme-provider';
+import { inputSurface } from '@/components/ui/input-style';
 import { useThemedStyles } from '@/hooks/use-themed-styles';
-import { fonts, radii, spacing, typeScale, type Palette } from '@/constants/theme';
+import { radii, spacing, type Palette } from '@/constants/theme';
 
 /** `node-editor-exposureS-input` for the field at `exposureS`. */
 export const inputID = (path: string) => `node-editor-${path}-input`;
@@ -133,17 +134,11 @@ const makeStyles = (c: Palette) =>
   StyleSheet.create({
     field: { gap: spacing.xs + 2 },
     input: {
-      ...typeScale.body,
-      fontFamily: fonts.regular,
-      color: c.text,
-      backgroundColor: c.surface,
-      borderWidth: 1,
-      borderColor: c.borderStrong,
+      ...inputSurface(c),
       borderRadius: radii.md,
       paddingHorizontal: spacing.md,
       paddingVertical: spacing.sm,
       minHeight: 42,
-      outlineColor: c.accent,
     },
     numeric: { fontVariant: ['tabular-nums'] },
     multiline: { minHeight: 96, textAlignVertical: 'top' },
