@@ -266,5 +266,85 @@ export const templateUse = pgTable(
 export const userSettings = pgTable('user_settings', {
   userId: text().primaryKey().references(() => user.id, { onDelete: 'cascade' }),
   notifyTemplateVersions: boolean().notNull().default(true),
+  /** Dark sets older than this many months are stale (default 6; common practice, trade-defaults.md S22). */
+  darkValidityMonths: integer().notNull().default(6),
   updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
+
+/**
+ * One recorded frame (light, dark, flat or bias) read from a FITS header at intake. The
+ * fingerprint (shared/fits/fingerprint.ts) is unique per owner, so a frame imported twice is
+ * counted once. Which target a light belongs to is worked out when history is read (targets
+ * change; frames do not).
+ */
+export const captureFrame = pgTable(
+  'capture_frame',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    fingerprint: text().notNull(),
+    fileName: text().notNull(),
+    frameType: text().$type<'light' | 'dark' | 'flat' | 'bias'>().notNull(),
+    object: text(),
+    takenAt: timestamp({ withTimezone: true }).notNull(),
+    /** The evening the frame's night started on, at the user's default site (else UTC). */
+    nightDate: text().notNull(),
+    exposureS: doublePrecision().notNull(),
+    filter: text(),
+    gain: doublePrecision(),
+    offset: doublePrecision(),
+    binning: integer().notNull().default(1),
+    readoutMode: text(),
+    setTempC: doublePrecision(),
+    sensorTempC: doublePrecision(),
+    focuserPositionSteps: integer(),
+    rotatorAngleDeg: doublePrecision(),
+    pierSide: text().$type<'east' | 'west'>(),
+    /** Telescope pointing from OBJCTRA/OBJCTDEC or RA/DEC. */
+    pointingRaDeg: doublePrecision(),
+    pointingDecDeg: doublePrecision(),
+    /** Image centre and sky position angle from the WCS, when the frame was plate-solved. */
+    wcsRaDeg: doublePrecision(),
+    wcsDecDeg: doublePrecision(),
+    wcsPositionAngleDeg: doublePrecision(),
+    wcsScaleArcsecPerPx: doublePrecision(),
+    wcsMirrored: boolean(),
+    intakeId: uuid().notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex('capture_frame_owner_fingerprint_idx').on(t.ownerId, t.fingerprint),
+    index('capture_frame_owner_type_night_idx').on(t.ownerId, t.frameType, t.nightDate),
+  ],
+);
+
+/** A dark set entered by hand (sets from intake are the recorded dark frames, grouped). */
+export const darkSet = pgTable(
+  'dark_set',
+  {
+    ...ownedRow(),
+    exposureS: doublePrecision().notNull(),
+    gain: doublePrecision(),
+    offset: doublePrecision(),
+    binning: integer().notNull().default(1),
+    readoutMode: text(),
+    temperatureC: doublePrecision().notNull(),
+    frames: integer().notNull(),
+    /** YYYY-MM-DD. */
+    takenOn: text().notNull(),
+    notes: text().notNull().default(''),
+  },
+  (t) => [index('dark_set_owner_idx').on(t.ownerId)],
+);
+
+/** A target's capture summary shared into a club by its owner (nothing is shared otherwise). */
+export const captureShare = pgTable(
+  'capture_share',
+  {
+    ownerId: text().notNull().references(() => user.id, { onDelete: 'cascade' }),
+    targetId: uuid().notNull().references(() => target.id, { onDelete: 'cascade' }),
+    organizationId: text().notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('capture_share_target_org_idx').on(t.targetId, t.organizationId), index('capture_share_org_idx').on(t.organizationId)],
+);

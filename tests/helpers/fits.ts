@@ -82,3 +82,83 @@ export function buildFits(cards: TestCard[], options: BuildFitsOptions = {}): Ui
 export function blocks(count: number): number {
   return count * BLOCK;
 }
+
+/** What a camera frame says about itself; anything left out is not written. */
+export interface CameraFrameSpec {
+  type: 'Light Frame' | 'Dark Frame' | 'Flat Field' | 'Bias Frame' | string;
+  /** DATE-OBS, UTC, "YYYY-MM-DDThh:mm:ss". */
+  dateObs: string;
+  exposureS?: number;
+  object?: string;
+  filter?: string;
+  gain?: number;
+  offset?: number;
+  binning?: number;
+  readoutMode?: string;
+  setTempC?: number;
+  sensorTempC?: number;
+  focuserPositionSteps?: number;
+  rotatorAngleDeg?: number;
+  pierSide?: 'EAST' | 'WEST';
+  /** OBJCTRA / OBJCTDEC as sexagesimal text. */
+  objctRa?: string;
+  objctDec?: string;
+  /**
+   * A plate solution: centre (CRVAL at the centre pixel), sky PA of +y east of north and scale,
+   * written as a CD matrix the normal (unmirrored) way: CD = s·[[−cos ρ, −sin ρ], [−sin ρ, cos ρ]]
+   * with ρ = −PA (checks.md: PA = atan2(CD1_2, CD2_2)).
+   */
+  wcs?: { raDeg: number; decDeg: number; positionAngleDeg: number; scaleArcsecPerPx: number };
+  widthPx?: number;
+  heightPx?: number;
+  /** Extra cards after the camera's. */
+  extra?: TestCard[];
+}
+
+/**
+ * Cards of a camera frame with the keyword conventions of checks.md (IMAGETYP, DATE-OBS,
+ * EXPTIME, FILTER, GAIN, OFFSET, XBINNING/YBINNING, READOUTM, SET-TEMP, CCD-TEMP, FOCUSPOS,
+ * ROTATANG, PIERSIDE, OBJCTRA/OBJCTDEC) and an optional TAN plate solution.
+ */
+export function cameraFrameCards(spec: CameraFrameSpec): TestCard[] {
+  const w = spec.widthPx ?? 16;
+  const h = spec.heightPx ?? 8;
+  const cards: TestCard[] = [{ key: 'IMAGETYP', value: spec.type }, { key: 'DATE-OBS', value: spec.dateObs }];
+  if (spec.exposureS !== undefined) cards.push({ key: 'EXPTIME', value: spec.exposureS });
+  if (spec.object !== undefined) cards.push({ key: 'OBJECT', value: spec.object });
+  if (spec.filter !== undefined) cards.push({ key: 'FILTER', value: spec.filter });
+  if (spec.gain !== undefined) cards.push({ key: 'GAIN', value: spec.gain });
+  if (spec.offset !== undefined) cards.push({ key: 'OFFSET', value: spec.offset });
+  if (spec.binning !== undefined) cards.push({ key: 'XBINNING', value: spec.binning }, { key: 'YBINNING', value: spec.binning });
+  if (spec.readoutMode !== undefined) cards.push({ key: 'READOUTM', value: spec.readoutMode });
+  if (spec.setTempC !== undefined) cards.push({ key: 'SET-TEMP', value: spec.setTempC });
+  if (spec.sensorTempC !== undefined) cards.push({ key: 'CCD-TEMP', value: spec.sensorTempC });
+  if (spec.focuserPositionSteps !== undefined) cards.push({ key: 'FOCUSPOS', value: spec.focuserPositionSteps });
+  if (spec.rotatorAngleDeg !== undefined) cards.push({ key: 'ROTATANG', value: spec.rotatorAngleDeg });
+  if (spec.pierSide !== undefined) cards.push({ key: 'PIERSIDE', value: spec.pierSide });
+  if (spec.objctRa !== undefined) cards.push({ key: 'OBJCTRA', value: spec.objctRa });
+  if (spec.objctDec !== undefined) cards.push({ key: 'OBJCTDEC', value: spec.objctDec });
+  if (spec.wcs) {
+    const s = spec.wcs.scaleArcsecPerPx / 3600;
+    const rho = (-spec.wcs.positionAngleDeg * Math.PI) / 180;
+    const round = (v: number) => Number(v.toPrecision(12));
+    cards.push(
+      { key: 'CTYPE1', value: 'RA---TAN' },
+      { key: 'CTYPE2', value: 'DEC--TAN' },
+      { key: 'CRPIX1', value: (w + 1) / 2 },
+      { key: 'CRPIX2', value: (h + 1) / 2 },
+      { key: 'CRVAL1', value: round(spec.wcs.raDeg) },
+      { key: 'CRVAL2', value: round(spec.wcs.decDeg) },
+      { key: 'CD1_1', value: round(-s * Math.cos(rho)) },
+      { key: 'CD1_2', value: round(-s * Math.sin(rho)) },
+      { key: 'CD2_1', value: round(-s * Math.sin(rho)) },
+      { key: 'CD2_2', value: round(s * Math.cos(rho)) },
+    );
+  }
+  return imageCards(w, h, [...cards, ...(spec.extra ?? [])]);
+}
+
+/** A whole camera frame file (header, then `dataBytes` of data). */
+export function cameraFrame(spec: CameraFrameSpec, options: BuildFitsOptions = {}): Uint8Array {
+  return buildFits(cameraFrameCards(spec), options);
+}
