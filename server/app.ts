@@ -11,9 +11,12 @@ import { apiNotFound, errorHandler } from './errors';
 import { createMailer, type Mailer } from './mail/mailer';
 import { requireSameOrigin, requireSession, requireSiteAdmin } from './middleware/session';
 import { accountRouter } from './routes/account';
+import { clubCapturesRouter } from './routes/club-captures';
 import { clubsRouter } from './routes/clubs';
 import { devMailRouter } from './routes/dev-mail';
 import { healthRouter } from './routes/health';
+import { historyRouter } from './routes/history';
+import { calibrationIntakeRouter, calibrationRouter } from './routes/calibration';
 import { catalogueSearchRouter } from './routes/catalogue-search';
 import { cataloguesRouter } from './routes/catalogues';
 import { fitsRouter } from './routes/fits';
@@ -68,11 +71,14 @@ export function createApp({ env, db, auth, mailer }: AppDeps): Express {
     next();
   }, toNodeHandler(auth));
 
+  const session = requireSession(auth);
+  const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
+  // Intake reads a whole folder's headers in one body: its own, larger limit (after the session check).
+  app.use('/api/calibration/intake', session, sameOrigin, calibrationIntakeRouter(db));
+
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db));
 
-  const session = requireSession(auth);
-  const sameOrigin = requireSameOrigin([new URL(env.BASE_URL).origin]);
   app.use('/api/sites', session, sameOrigin, sitesRouter(db));
   app.use('/api/rigs', session, sameOrigin, rigsRouter(db));
   app.use('/api/recipes', session, sameOrigin, recipeDryRunsRouter(db), recipePlanRouter(db), recipeTemplateRouter(db), recipesRouter(db));
@@ -80,11 +86,14 @@ export function createApp({ env, db, auth, mailer }: AppDeps): Express {
   app.use('/api/dry-runs', session, sameOrigin, treeDryRunRouter(db));
   app.use('/api/targets', session, sameOrigin, targetsRouter(db));
   app.use('/api/clubs/:clubId/templates', session, sameOrigin, templatesRouter(db, mail, env.BASE_URL));
+  app.use('/api/clubs/:clubId/captures', session, sameOrigin, clubCapturesRouter(db));
   app.use('/api/clubs', session, sameOrigin, clubsRouter(db));
   app.use('/api/account', session, sameOrigin, accountRouter(db));
   app.use('/api/catalogues', session, sameOrigin, cataloguesRouter(db));
   app.use('/api/catalogue', session, catalogueSearchRouter(db));
   app.use('/api/fits', session, sameOrigin, fitsRouter());
+  app.use('/api/calibration', session, sameOrigin, calibrationRouter(db));
+  app.use('/api/history', session, sameOrigin, historyRouter(db));
   app.use('/api/tonight', session, tonightRouter(db));
   app.use('/api/visibility', session, visibilityRouter(db));
   if (env.DEV_MAIL_PAGE === 'on') app.use('/api/dev/mail', session, requireSiteAdmin, devMailRouter(db));

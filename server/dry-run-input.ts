@@ -1,12 +1,16 @@
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type { Database } from '@/db/client';
-import { framing, rig, target } from '@/db/schema';
+import { captureFrame, darkSet, framing, rig, target, userSettings } from '@/db/schema';
 import { HttpError } from '@/server/errors';
+import { darkLibraryForDryRun, groupDarkFrames, isDarkSetStale } from '@/shared/calibration/darks';
+import type { StoredFrame } from '@/shared/calibration/types';
+import type { DarkLibrary, DarkLibrarySet } from '@/shared/schemas/calibration-api';
 import type { DryRunInput, DryRunTarget } from '@/shared/dry-run';
 import { targetIds } from '@/shared/recipe/summary';
 import type { RecipeTree } from '@/shared/recipe/types';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
 import { currentNightDate } from '@/shared/night-date';
+import { localDateYmd } from '@/shared/time';
 import { findDefaultSite, findOwnSite } from './routes/sites';
 
 export interface DryRunContext {
@@ -18,7 +22,8 @@ export interface DryRunContext {
 /**
  * Everything a dry run needs from the database, for one user: the rig (the recipe's, else a
  * rig with the defaults of trade-defaults.md), the site (the recipe's, else the default site),
- * the targets the tree points at with their framings, and the night's date.
+ * the targets the tree points at with their framings, the night's date and the dark library
+ * (sets entered by hand and sets grouped from recorded dark frames) with its validity.
  */
 export async function loadDryRunContext(
   db: Database,
@@ -37,6 +42,7 @@ export async function loadDryRunContext(
   const ids = targetIds(tree);
   const rows = ids.length ? await db.select().from(target).where(and(eq(target.ownerId, ownerId), inArray(target.id, ids))) : [];
   const frames = rows.length ? await db.select().from(framing).where(inArray(framing.targetId, rows.map((t) => t.id))).orderBy(asc(framing.createdAt)) : [];
+  const library = await loadDarkLibrary(db, ownerId);
   const targets: Record<string, DryRunTarget> = {};
   for (const t of rows) {
     targets[t.id] = {
@@ -57,7 +63,55 @@ export async function loadDryRunContext(
       nightDate: opts.date ?? currentNightDate(siteRow.timeZone),
       startTime: opts.startTime,
       targets,
-      darkLibrary: [],
+      darkLibrary: library.sets.length ? darkLibraryForDryRun(library.sets) : [],
+      darkValidityMonths: library.validityMonths,
     },
   };
+}
+
+/** Dark sets are stale after this many months unless the user chose otherwise (trade-defaults.md S22). */
+export const DEFAULT_DARK_VALIDITY_MONTHS = 6;
+
+type FrameRow = typeof captureFrame.$inferSelect;
+type DarkSetRow = typeof darkSet.$inferSelect;
+
+/** A stored frame row as the pure calibration functions take it. */
+export function toStoredFrame(row: FrameRow): StoredFrame {
+  const { id: _id, ownerId: _owner, intakeId: _intake, createdAt: _created, takenAt, ...rest } = row;
+  return { ...rest, takenAt: takenAt.toISOString() };
+}
+
+/** The user's dark validity and today's date at their default site (else UTC), for staleness. */
+export async function darkValidity(db: Database, ownerId: string, now: Date = new Date()): Promise<{ validityMonths: number; today: string }> {
+  const [row] = await db.select({ months: userSettings.darkValidityMonths }).from(userSettings).where(eq(userSettings.userId, ownerId));
+  const siteRow = await findDefaultSite(db, ownerId);
+  return { validityMonths: row?.months ?? DEFAULT_DARK_VALIDITY_MONTHS, today: localDateYmd(now, siteRow?.timeZone ?? 'UTC') };
+}
+
+/** A dark set entered by hand, as the library lists it. */
+export function handDarkSet(row: DarkSetRow, validity: { validityMonths: number; today: string }): DarkLibrarySet {
+  return {
+    id: row.id,
+    source: 'hand',
+    version: row.version,
+    exposureS: row.exposureS,
+    gain: row.gain,
+    offset: row.offset,
+    binning: row.binning,
+    readoutMode: row.readoutMode,
+    temperatureC: row.temperatureC,
+    frames: row.frames,
+    takenOn: row.takenOn,
+    stale: isDarkSetStale(row.takenOn, validity.validityMonths, validity.today),
+    notes: row.notes,
+  };
+}
+
+/** The user's dark library: sets entered by hand, then sets grouped from recorded dark frames (newest first). */
+export async function loadDarkLibrary(db: Database, ownerId: string): Promise<DarkLibrary> {
+  const validity = await darkValidity(db, ownerId);
+  const hand = await db.select().from(darkSet).where(eq(darkSet.ownerId, ownerId)).orderBy(desc(darkSet.takenOn), asc(darkSet.createdAt));
+  const frames = await db.select().from(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), eq(captureFrame.frameType, 'dark')));
+  const grouped = frames.length ? groupDarkFrames(frames.map(toStoredFrame), validity.validityMonths, validity.today) : [];
+  return { validityMonths: validity.validityMonths, sets: [...hand.map((row) => handDarkSet(row, validity)), ...grouped] };
 }

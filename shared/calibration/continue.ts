@@ -1,14 +1,80 @@
 import type { RecordedFraming } from '@/shared/schemas/calibration-api';
-import type { NodeOf } from '@/shared/recipe/types';
+import { wrap360 } from '@/shared/calibration/sky-geometry';
+import { createNode } from '@/shared/recipe/factory';
+import { findSlotByName } from '@/shared/recipe/filters';
+import { stageSchema } from '@/shared/recipe/schema';
+import type { NodeOf, RecipeNode } from '@/shared/recipe/types';
 import type { RigInput } from '@/shared/rig/schema';
 
-/** "Continue this target": a new stage at the recorded framing's centre and the chosen PA, with an expose step per recorded filter (its most used exposure), sized for the rig's filters. */
+/** A recorded filter's exposure settings (its most used, as the caller picks them). */
+export interface RecordedExposure {
+  filter: string | null;
+  exposureS: number;
+  gain: number | null;
+  offset: number | null;
+  binning: number;
+}
+
+/** An exposure the new stage takes: `filter` is the wheel slot's own name. */
+export type ContinueExposure = RecordedExposure & { filter: string };
+
+const inRange = (v: number, min: number, max: number) => Number.isFinite(v) && v >= min && v <= max;
+
+/**
+ * The recorded exposures a "continue" stage can take on this rig: those whose filter is in the
+ * wheel by name (case and surrounding spaces ignored; the slot's spelling is used), first one per
+ * slot, with settings an expose step holds (exposure 0.001–3600 s, binning 1–4). `skipped` names
+ * the recorded filters left out (frames without a filter name are left out unnamed).
+ */
+export function continueExposures(exposures: readonly RecordedExposure[], rig: Pick<RigInput, 'filterWheel'>): { kept: ContinueExposure[]; skipped: string[] } {
+  const kept: ContinueExposure[] = [];
+  const skipped: string[] = [];
+  for (const e of exposures) {
+    if (e.filter === null) continue;
+    const slot = findSlotByName(rig, e.filter);
+    const usable = slot !== undefined && inRange(e.exposureS, 0.001, 3600) && Number.isInteger(e.binning) && inRange(e.binning, 1, 4);
+    if (!slot || !usable) {
+      if (!skipped.includes(e.filter)) skipped.push(e.filter);
+      continue;
+    }
+    if (kept.some((k) => k.filter === slot.name)) continue;
+    kept.push({ ...e, filter: slot.name });
+  }
+  return { kept, skipped };
+}
+
+/** Frames per expose block: about 15 minutes of one filter (Nightloom choice, as a new expose step). */
+function blockCount(exposureS: number): number {
+  return Math.max(1, Math.round(900 / exposureS));
+}
+
+function exposeNode(e: ContinueExposure, rig: RigInput): RecipeNode {
+  const gain = e.gain !== null && inRange(e.gain, 0, 100000) ? { gain: e.gain } : {};
+  const offset = e.offset !== null && inRange(e.offset, 0, 100000) ? { offset: e.offset } : {};
+  return createNode('expose', { filter: e.filter, exposureS: e.exposureS, count: blockCount(e.exposureS), binning: e.binning, ...gain, ...offset }, { rig });
+}
+
+/**
+ * "Continue this target": a stage named "Continue <label>" for the target, framed at the recorded
+ * framing's centre and the chosen PA, between astronomical dusk and dawn. Children: slew to the
+ * stage target, centre, rotate to the framing (with a rotator), focus with the first filter,
+ * guide (with a guider), a flip policy (German mount), then one expose step per recorded filter
+ * the wheel holds (`continueExposures`), with its exposure, gain, offset and binning.
+ */
 export function continueStage(targetId: string, targetLabel: string, framing: RecordedFraming, positionAngleDeg: number, exposures: readonly { filter: string | null; exposureS: number; gain: number | null; offset: number | null; binning: number }[], rig: RigInput): NodeOf<'stage'> {
-  void targetId;
-  void targetLabel;
-  void framing;
-  void positionAngleDeg;
-  void exposures;
-  void rig;
-  throw new Error('not implemented');
+  const { kept } = continueExposures(exposures, rig);
+  const make = { rig };
+  const children: RecipeNode[] = [createNode('slew', { to: { kind: 'stage-target' } }, make), createNode('centre', {}, make)];
+  if (rig.rotator.present) children.push(createNode('rotate', { to: { matchFraming: true } }, make));
+  children.push(createNode('focus', kept[0] ? { filter: kept[0].filter } : {}, make));
+  if (rig.guider.present) children.push(createNode('guide', {}, make));
+  if (rig.mount.type === 'german-equatorial') children.push(createNode('meridian', {}, make));
+  for (const e of kept) children.push(exposeNode(e, rig));
+  const stage = createNode('stage', {
+    targetId,
+    label: `Continue ${targetLabel}`.slice(0, 80).trim(),
+    framing: { raDeg: wrap360(framing.raDeg), decDeg: Math.max(-90, Math.min(90, framing.decDeg)), positionAngleDeg: wrap360(positionAngleDeg) },
+    window: { notBefore: 'astronomical-dusk', endBy: 'astronomical-dawn' },
+  });
+  return stageSchema.parse({ ...stage, children }) as NodeOf<'stage'>;
 }

@@ -33,8 +33,10 @@ export interface DryRunTarget {
 /** One set of the user's dark library. */
 export interface DarkSet {
   exposureS: number;
-  gain: number;
-  offset: number;
+  /** The camera's gain setting; null when the set's frames did not record one (it then matches only lights without a gain). */
+  gain: number | null;
+  /** Likewise for the offset. */
+  offset: number | null;
   binning: number;
   readoutMode?: string;
   temperatureC: number;

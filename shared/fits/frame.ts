@@ -22,6 +22,8 @@ export interface FrameRecord {
   gain?: number;
   offset?: number;
   binning?: { x: number; y: number };
+  /** READOUTM, else READMODE: the camera's named readout mode (darks match on it). */
+  readoutMode?: string;
   setTempC?: number;
   sensorTempC?: number;
   focuserPositionSteps?: number;
@@ -110,7 +112,7 @@ function pointingFrom(h: FitsLookup): { raDeg?: number; decDeg?: number } {
 
 /**
  * Reads the camera conventions of checks.md (IMAGETYP, OBJECT, DATE-OBS, EXPTIME/EXPOSURE,
- * FILTER, GAIN, OFFSET, XBINNING/YBINNING, SET-TEMP, CCD-TEMP, FOCUSPOS/FOCPOS, ROTATANG,
+ * FILTER, GAIN, OFFSET, XBINNING/YBINNING, READOUTM/READMODE, SET-TEMP, CCD-TEMP, FOCUSPOS/FOCPOS, ROTATANG,
  * PIERSIDE, XPIXSZ, FOCALLEN, OBJCTRA/OBJCTDEC) into a frame record. Never throws for a
  * missing or odd keyword.
  */
@@ -127,6 +129,7 @@ export function frameFromHeader(h: FitsLookup): FrameRecord {
     gain: num(h, 'GAIN'),
     offset: num(h, 'OFFSET'),
     binning: binningFrom(h),
+    readoutMode: text(h, 'READOUTM', 'READMODE'),
     setTempC: num(h, 'SET-TEMP'),
     sensorTempC: num(h, 'CCD-TEMP'),
     focuserPositionSteps: num(h, 'FOCUSPOS', 'FOCPOS'),

@@ -131,10 +131,29 @@ export const waitStepSchema = z.object({
   }),
 });
 
+/** A rotator angle on the rotator's own scale (ROTATANG), 0 ≤ angle < 360. */
+export const rotatorAngleSchema = z
+  .number({ error: 'Rotator angle must be a number' })
+  .min(0, 'Rotator angle must be between 0 and 360°')
+  .lt(360, 'Rotator angle must be below 360°');
+
+/**
+ * The rotator angle and focuser position the lights were taken at (from their FITS headers), for
+ * flats taken later: flats are valid while optical train, focus, filter and rotator angle are
+ * unchanged (trade-defaults.md "flats valid while", S18). At least one of the two.
+ */
+export const recordedPositionsSchema = z
+  .object({
+    kind: z.literal('positions'),
+    rotatorAngleDeg: rotatorAngleSchema.optional(),
+    focuserPositionSteps: whole('Focuser position', 'steps', 0, 1_000_000).optional(),
+  })
+  .refine((p) => p.rotatorAngleDeg !== undefined || p.focuserPositionSteps !== undefined, { message: 'Give a rotator angle, a focuser position or both' });
+
 export const matchFramingOfSchema = z.discriminatedUnion(
   'kind',
-  [z.object({ kind: z.literal('stage'), stageId: idSchema }), z.object({ kind: z.literal('framing'), framingId: idSchema })],
-  { error: 'Match framing of a stage or a recorded framing' },
+  [z.object({ kind: z.literal('stage'), stageId: idSchema }), z.object({ kind: z.literal('framing'), framingId: idSchema }), recordedPositionsSchema],
+  { error: 'Match the framing of a stage, a recorded framing, or recorded rotator and focuser positions' },
 );
 
 export const flatsStepSchema = z.object({

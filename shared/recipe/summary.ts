@@ -107,8 +107,16 @@ function summarizeWait(node: NodeOf<'wait'>): string {
 
 function summarizeFlats(node: NodeOf<'flats'>): string {
   const level = node.targetAduPct === undefined ? '' : ` at ${n(node.targetAduPct)} %`;
-  const match = node.matchFramingOf ? `, matching ${node.matchFramingOf.kind === 'stage' ? "a stage's" : 'a recorded'} framing` : '';
+  const match = node.matchFramingOf ? `, ${matchText(node.matchFramingOf)}` : '';
   return `${node.source === 'sky' ? 'Sky' : 'Panel'} flats: ${formatList(node.filters)}, ${node.count} each${level}${match}`;
+}
+
+/** "matching a stage's framing", "matching a recorded framing" or "at rotator 123.4°, focuser 15200". */
+function matchText(m: NonNullable<NodeOf<'flats'>['matchFramingOf']>): string {
+  if (m.kind === 'stage') return "matching a stage's framing";
+  if (m.kind === 'framing') return 'matching a recorded framing';
+  const at = [m.rotatorAngleDeg === undefined ? '' : `rotator ${n(m.rotatorAngleDeg)}°`, m.focuserPositionSteps === undefined ? '' : `focuser ${m.focuserPositionSteps}`].filter(Boolean);
+  return `at ${at.join(', ')}`;
 }
 
 function summarizeDarks(node: NodeOf<'darks'>): string {

@@ -8,7 +8,7 @@ import type { RigInput } from '@/shared/rig/schema';
 /*
  * Club templates are rig-agnostic trees. Filter references name a band ("Ha", "L") or, for a
  * filter of no standard band, the filter's own name; numbers that only make sense on one rig
- * (gain, offset, cooler rates, focuser step size) are not copied; stages lose the publisher's
+ * (gain, offset, cooler rates, focuser step size, recorded rotator and focuser positions) are not copied; stages lose the publisher's
  * target id and keep, at most, a suggested target (designation and coordinates) beside the tree.
  */
 
@@ -63,7 +63,8 @@ function stripRigNumbers(node: RecipeNode): RecipeNode {
     case 'focus':
       return { ...node, stepSize: D.focus.stepSize };
     case 'flats':
-      return node.matchFramingOf?.kind === 'framing' ? omit(node, ['matchFramingOf']) : node;
+      // A recorded framing is the publisher's; recorded rotator and focuser positions are their rig's.
+      return node.matchFramingOf?.kind === 'framing' || node.matchFramingOf?.kind === 'positions' ? omit(node, ['matchFramingOf']) : node;
     case 'stage':
       return { ...node, targetId: null };
     default:

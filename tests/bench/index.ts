@@ -9,6 +9,7 @@ import { darkHoursScreen, targetVisibility } from '@/shared/ephemeris/visibility
 import { parseCatalogueCsv, detectCsvLayout } from '@/shared/targets/csv-import';
 import { BUILTIN_TARGETS } from '@/shared/targets/builtin';
 import { searchTargets } from '@/shared/targets/search';
+import { calibrationCases } from './calibration';
 import { runDryRunBench } from './dry-run';
 
 interface Case {
@@ -56,6 +57,7 @@ const cases: Case[] = [
   },
   { name: 'parseCatalogueCsv, 14,000 rows', goal: '< 1 s', runs: 5, fn: () => parseCatalogueCsv(csv, mapping) },
   { name: 'searchTargets "XB 1234" over 14,344 objects', goal: '< 50 ms', runs: 20, fn: () => searchTargets(bigList, { query: 'XB 1234' }, 50) },
+  ...calibrationCases,
 ];
 
 function stats(samples: number[]) {

@@ -3,6 +3,8 @@ import { walk } from '@/shared/recipe/tree-read';
 import type { NodeOf } from '@/shared/recipe/types';
 import { darksDurationS, FLAT_MODEL, flatsDurationS } from '@/shared/dry-run/models/calibration';
 import { temperatureChangeS } from '@/shared/dry-run/models/cooling';
+import { FOCUS_MODEL } from '@/shared/dry-run/models/focus';
+import { planRotation } from '@/shared/dry-run/models/rotate';
 import { act } from '@/shared/dry-run/engine/act';
 import { rotateToPa } from '@/shared/dry-run/engine/mount-steps';
 import type { Ended, Scope } from '@/shared/dry-run/engine/scope';
@@ -22,9 +24,38 @@ function stagePaDeg(sim: Sim, stageId: string): number | undefined {
   return pa;
 }
 
+type RecordedPositions = Extract<NonNullable<NodeOf<'flats'>['matchFramingOf']>, { kind: 'positions' }>;
+
+/**
+ * Back to the rotator angle and focuser position the lights were taken at. Model: the rotator
+ * turns |Δ| / speed to the equivalent mechanical angle within travel nearest its own (as a
+ * rotate step); the focuser makes one move of FOCUS_MODEL.moveS (5 s, common practice: the rig
+ * stores no focuser speed and the dry run no focuser position). Without a rotator the angle is
+ * set by hand before the night and takes no modelled time.
+ */
+function moveToPositions(sim: Sim, scope: Scope, p: RecordedPositions, nodeId: string): Ended | null {
+  const r = sim.rig.rotator;
+  if (p.rotatorAngleDeg !== undefined && r.present) {
+    const move = planRotation(sim.rotatorDeg, p.rotatorAngleDeg, null, { ...r, skyOffsetDeg: 0 });
+    if (!move.reachable) {
+      sim.out.finding({ code: 'rotator-limit', severity: 'stop', ms: sim.t, nodeId, message: `Rotator angle ${n(p.rotatorAngleDeg)}° is outside its travel (${n(r.minDeg)}° to ${n(r.maxDeg)}°)`, fix: 'Widen the travel limits if the cables allow, or turn the camera by hand for these flats' });
+    } else {
+      const ended = act(sim, scope, 'rotate', move.durationS, nodeId, `Rotator to ${n(p.rotatorAngleDeg)}° for flats: ${n(move.moveDeg)}°`);
+      if (ended) return ended;
+      sim.rotatorDeg = move.mechanicalDeg;
+    }
+  }
+  if (p.focuserPositionSteps !== undefined) {
+    const ended = act(sim, scope, 'focus', FOCUS_MODEL.moveS, nodeId, `Focuser to ${p.focuserPositionSteps} for flats`);
+    if (ended) return ended;
+  }
+  return null;
+}
+
 /**
  * Flats: count × (exposure + download) per filter with a change per filter (rule 5). With
- * `matchFramingOf` a stage, the rotator turns to that framing first. Sky flats wait for their
+ * `matchFramingOf` a stage, the rotator turns to that framing first; with recorded positions,
+ * the rotator and focuser return to them first (`moveToPositions`). Sky flats wait for their
  * twilight window (dusk: Sun −4° to −10°; dawn: −10° to −7°) and must fit inside it; frames
  * beyond it are `daylight`.
  */
@@ -32,6 +63,10 @@ export function runFlats(sim: Sim, node: NodeOf<'flats'>, scope: Scope): Ended |
   const match = node.matchFramingOf?.kind === 'stage' ? stagePaDeg(sim, node.matchFramingOf.stageId) : undefined;
   if (match !== undefined) {
     const ended = rotateToPa(sim, scope, match, 0, node.id, 'Rotate to the framing for flats');
+    if (ended) return ended;
+  }
+  if (node.matchFramingOf?.kind === 'positions') {
+    const ended = moveToPositions(sim, scope, node.matchFramingOf, node.id);
     if (ended) return ended;
   }
   const { exposureS, durationS } = flatsDurationS(node.source, node.filters.length, node.count, sim.rig);

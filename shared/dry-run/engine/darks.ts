@@ -5,7 +5,11 @@ import type { DarkSet, DarksNeeded } from '@/shared/dry-run/types';
 
 type DarkKey = Omit<LightUse, 'nodeId' | 'frames'>;
 
-/** Darks match on exposure, gain, offset, binning, readout mode and set-point ±1 °C (trade-defaults.md "calibration", S17, S44). */
+/**
+ * Darks match on exposure, gain, offset, binning, readout mode and set-point ±1 °C
+ * (trade-defaults.md "calibration", S17, S44). A light without a gain (offset) setting takes
+ * any set's; a set without one (null) matches only such a light.
+ */
 function matches(set: Omit<DarkSet, 'frames' | 'takenAt'> | DarkKey, light: DarkKey): boolean {
   return (
     Math.abs(set.exposureS - light.exposureS) < 1e-6 &&
@@ -17,8 +21,12 @@ function matches(set: Omit<DarkSet, 'frames' | 'takenAt'> | DarkKey, light: Dark
   );
 }
 
-/** The date `months` calendar months before `dateYmd`, as epoch ms (UTC midnight). */
-function monthsBefore(dateYmd: string, months: number): number {
+/**
+ * The date `months` calendar months before `dateYmd`, as epoch ms (UTC midnight); a day past the
+ * month's end rolls over as `Date.UTC` does (31 August − 6 months → 3 March). Dark library
+ * staleness uses the same rule (`shared/calibration/darks.ts`).
+ */
+export function monthsBefore(dateYmd: string, months: number): number {
   const [y, m, d] = dateYmd.split('-').map(Number) as [number, number, number];
   return Date.UTC(y, m - 1 - months, d);
 }
