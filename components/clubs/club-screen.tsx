@@ -3,6 +3,7 @@ import { router } from 'expo-router';
 import { ClubTemplatesSection } from '@/components/clubs/club-templates-section';
 import { InvitationsSection } from '@/components/clubs/invitations-section';
 import { MembersSection } from '@/components/clubs/members-section';
+import { ClubCapturesSection } from '@/components/history/club-captures-section';
 import { ErrorView } from '@/components/ui/error-view';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Screen } from '@/components/ui/screen';
@@ -10,7 +11,7 @@ import { TextLink } from '@/components/ui/text-link';
 import { canManageClub, useClubPeopleMutations, useClubQuery } from '@/hooks/use-clubs';
 import { useSessionState } from '@/hooks/use-session';
 
-/** One club: templates, members and (for owners and admins) invitations. */
+/** One club: templates, shared captures, members and (for owners and admins) invitations. */
 export function ClubScreen({ clubId }: { clubId: string }) {
   const club = useClubQuery(clubId);
   const people = useClubPeopleMutations(clubId);
@@ -24,6 +25,7 @@ export function ClubScreen({ clubId }: { clubId: string }) {
   return (
     <Screen title={club.data.club.name} subtitle={`${members.length} ${members.length === 1 ? 'member' : 'members'}`} above={back} testID="club-screen">
       <ClubTemplatesSection clubId={clubId} canPublish={manage} knownTags={knownTags} />
+      <ClubCapturesSection clubId={clubId} />
       <MembersSection members={members} myRoles={myRoles} myUserId={user?.id} people={people} onLeft={() => router.replace('/clubs')} />
       {manage ? <InvitationsSection invitations={invitations} people={people} /> : null}
     </Screen>

@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { AltitudeSection } from '@/components/dry-run/altitude-section';
 import { Cautions } from '@/components/dry-run/cautions';
+import { DarksSection } from '@/components/dry-run/darks-section';
 import { FindingsList } from '@/components/dry-run/findings-list';
 import type { Naming, TargetFacts } from '@/components/dry-run/naming';
 import { RunBand } from '@/components/dry-run/run-band';
@@ -16,8 +17,8 @@ import { spacing } from '@/constants/theme';
 type NightViewProps = { record: DryRunRecord; naming: Naming; targets: TargetFacts[]; nowMs: number; onShowStep: (nodeId: string) => void };
 
 /**
- * One night's dry run: the figures, the sky, the timeline, then findings with the cautions beside
- * them (on wide screens the altitude charts take the other column) and the totals.
+ * One night's dry run: the figures, the sky, the timeline, then findings, the darks they need and
+ * the cautions beside them (on wide screens the altitude charts take the other column) and the totals.
  */
 export function NightView({ record, naming, targets, nowMs, onShowStep }: NightViewProps) {
   const { isWide } = useBreakpoints();
@@ -33,6 +34,8 @@ export function NightView({ record, naming, targets, nowMs, onShowStep }: NightV
       <View style={[styles.stack, isWide && styles.columns]}>
         <View style={[styles.stack, isWide && styles.findingsColumn]}>
           <FindingsList findings={result.findings} timeZone={tz} naming={naming} onShowStep={onShowStep} />
+          {/* Runs stored before darks were planned carry no list. */}
+          <DarksSection needed={result.darksNeeded ?? []} rigId={record.rigId} />
           <Cautions />
         </View>
         <View style={[styles.stack, isWide && styles.altitudeColumn]}>

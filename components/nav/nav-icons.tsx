@@ -1,6 +1,6 @@
 import Svg, { Circle, Path, Rect } from 'react-native-svg';
 
-export type NavIconName = 'tonight' | 'recipes' | 'targets' | 'setup' | 'sites' | 'rig' | 'club' | 'account' | 'mail' | 'more';
+export type NavIconName = 'tonight' | 'recipes' | 'targets' | 'setup' | 'sites' | 'rig' | 'club' | 'account' | 'mail' | 'more' | 'calibration';
 
 type IconProps = { name: NavIconName; color: string; size?: number };
 
@@ -40,6 +40,15 @@ export function NavIcon({ name, color, size = 22 }: IconProps) {
           {/* A short tube on a tripod, tilted towards the sky. */}
           <Path d="M5 11.5l11.5-6.2 1.7 3.1L6.7 14.6z" {...stroke} />
           <Path d="M18.2 5l1.3-.7M11 12.7l-3 8.3M11 12.7l3 8.3M11 12.7V21" {...stroke} />
+        </>
+      ) : null}
+      {name === 'calibration' ? (
+        <>
+          {/* A stack of frames, the top one with a check: frames on record. */}
+          <Rect x={6.5} y={3.5} width={13} height={10} rx={1.5} {...stroke} />
+          <Path d="M4.5 7.5v8a2 2 0 0 0 2 2h11" {...stroke} />
+          <Path d="M2.5 11.5v8a2 2 0 0 0 2 2h11" {...stroke} />
+          <Path d="M10 8.6l1.9 1.9 3.8-3.8" {...stroke} />
         </>
       ) : null}
       {name === 'more' ? (

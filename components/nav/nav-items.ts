@@ -3,7 +3,7 @@ import type { NavIconName } from '@/components/nav/nav-icons';
 export type NavItem = {
   key: NavIconName;
   label: string;
-  href: '/' | '/recipes' | '/targets' | '/setup' | '/clubs' | '/account' | '/mail';
+  href: '/' | '/recipes' | '/targets' | '/setup' | '/calibration' | '/clubs' | '/account' | '/mail';
   testID: string;
   /** Other path prefixes that belong to this section (e.g. a rig's page under Rig & site). */
   alsoMatches?: string[];
@@ -20,6 +20,7 @@ export const navItems: NavItem[] = [
   { key: 'recipes', label: 'Recipes', href: '/recipes', testID: 'nav-recipes' },
   { key: 'targets', label: 'Targets', href: '/targets', testID: 'nav-targets' },
   { key: 'setup', label: 'Rig & site', href: '/setup', testID: 'nav-setup', alsoMatches: ['/rigs', '/sites'] },
+  { key: 'calibration', label: 'Calibration', href: '/calibration', testID: 'nav-calibration' },
   { key: 'club', label: 'Club', href: '/clubs', testID: 'nav-club' },
   { key: 'account', label: 'Account', href: '/account', testID: 'nav-account' },
   { key: 'mail', label: 'Mail', href: '/mail', testID: 'nav-mail', adminOnly: true },

@@ -1,3 +1,4 @@
+import { TargetHistoryLink } from '@/components/history/target-history-link';
 import { DeleteTargetZone } from '@/components/targets/delete-target-zone';
 import { FramingsSection } from '@/components/targets/framings-section';
 import { TargetFacts } from '@/components/targets/target-facts';
@@ -37,6 +38,7 @@ export function TargetDetailScreen({ id }: { id: string }) {
       <TargetFacts target={t} />
       <VisibilitySection raDeg={t.raDeg} decDeg={t.decDeg} />
       <FramingsSection target={t} />
+      <TargetHistoryLink targetId={t.id} />
       <TargetNotes target={t} />
       <DeleteTargetZone target={t} />
     </Screen>

@@ -92,6 +92,23 @@ const MERIDIAN: FieldSpec[] = [
   { path: 'policy.minutesBefore', type: 'number', initial: String(D.meridian.pauseMinutesBefore), include: when('policy.kind', 'pause-before') },
 ];
 
+/**
+ * What a flats step matches: `framing` keeps a stage's or a recorded framing as it is (it can only
+ * be dropped here); `positions` edits the rotator angle and focuser position the lights used.
+ */
+const matchMode = (node: RecipeNode) => {
+  const kind = getPath(node, 'matchFramingOf.kind');
+  return kind === undefined ? 'none' : kind === 'positions' ? 'positions' : 'framing';
+};
+const atPositions = when('matchFramingOf.mode', 'positions');
+const FLATS_MATCH: FieldSpec[] = [
+  { path: 'matchFramingOf.mode', type: 'mode', initial: 'none', derive: matchMode },
+  { path: 'matchFramingOf', type: 'keep', include: when('matchFramingOf.mode', 'framing') },
+  { path: 'matchFramingOf.kind', type: 'choice', initial: 'positions', include: atPositions },
+  { path: 'matchFramingOf.rotatorAngleDeg', type: 'optionalNumber', include: atPositions },
+  { path: 'matchFramingOf.focuserPositionSteps', type: 'optionalNumber', include: atPositions },
+];
+
 const num = (path: string): FieldSpec => ({ path, type: 'number' });
 const opt = (path: string): FieldSpec => ({ path, type: 'optionalNumber' });
 
@@ -124,7 +141,7 @@ export const KIND_FIELDS: Record<NodeKind, readonly FieldSpec[]> = {
     { path: 'filters', type: 'textList' },
     num('count'),
     opt('targetAduPct'),
-    { path: 'matchFramingOf', type: 'keep' },
+    ...FLATS_MATCH,
   ],
   darks: [{ path: 'exposuresS', type: 'numberList' }, num('count'), num('temperatureC'), opt('gain'), opt('offset'), num('binning')],
   park: [],

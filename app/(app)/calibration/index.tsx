@@ -1,0 +1,5 @@
+import { CalibrationScreen } from '@/components/calibration/calibration-screen';
+
+export default function CalibrationRoute() {
+  return <CalibrationScreen />;
+}

@@ -1,0 +1,92 @@
+/**
+ * Words and numbers of the calibration screen: frame counts by type, dark-set settings, angles.
+ * Pure, so the unit tests read them without a renderer.
+ */
+import type { CaptureFrameType, DarkLibrarySet, IntakeResult } from '@/shared/schemas/calibration-api';
+
+const TYPE_WORDS: Record<CaptureFrameType, [string, string]> = {
+  light: ['light', 'lights'],
+  dark: ['dark', 'darks'],
+  flat: ['flat', 'flats'],
+  bias: ['bias frame', 'bias frames'],
+};
+
+export const FRAME_TYPE_ORDER: readonly CaptureFrameType[] = ['light', 'dark', 'flat', 'bias'];
+
+/** "1 file", "12 files". */
+export function countText(n: number, one: string, many: string): string {
+  return `${n.toLocaleString('en-GB')} ${n === 1 ? one : many}`;
+}
+
+/** "12 lights, 3 darks and 4 flats", or null when nothing new was recorded. */
+export function recordedText(recorded: IntakeResult['recorded']): string | null {
+  const parts = FRAME_TYPE_ORDER.filter((t) => recorded[t] > 0).map((t) => countText(recorded[t], ...TYPE_WORDS[t]));
+  if (parts.length === 0) return null;
+  if (parts.length === 1) return parts[0]!;
+  return `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]!}`;
+}
+
+/** "Reading headers 120 / 400". */
+export function readingText(done: number, total: number): string {
+  return `Reading headers ${done.toLocaleString('en-GB')} / ${total.toLocaleString('en-GB')}`;
+}
+
+/** "300 s", "0.5 s", "1 200 s" without trailing zeros. */
+export function secondsText(s: number): string {
+  return `${Number(s.toFixed(3)).toLocaleString('en-GB')} s`;
+}
+
+/** "−10 °C" with a true minus. */
+export function celsiusText(c: number): string {
+  const r = Number(c.toFixed(1));
+  return `${r < 0 ? '−' : ''}${Math.abs(r)} °C`;
+}
+
+/** "125.0°": one decimal, 0 ≤ angle < 360. */
+export function degreesText(deg: number): string {
+  const norm = ((deg % 360) + 360) % 360;
+  const text = norm.toFixed(1);
+  return `${text === '360.0' ? '0.0' : text}°`;
+}
+
+/** "gain 100 · offset 50 · bin 1" (unset values say "as set"). */
+export function cameraSettingsText(s: { gain: number | null; offset: number | null; binning: number; readoutMode?: string | null }): string {
+  const parts = [`gain ${s.gain ?? 'as set'}`, `offset ${s.offset ?? 'as set'}`, `bin ${s.binning}`];
+  if (s.readoutMode) parts.push(s.readoutMode);
+  return parts.join(' · ');
+}
+
+/** "300 s at −10 °C": what a dark set is first known by. */
+export function darkSetHeadline(s: Pick<DarkLibrarySet, 'exposureS' | 'temperatureC'>): string {
+  return `${secondsText(s.exposureS)} at ${celsiusText(s.temperatureC)}`;
+}
+
+/** Library order: by temperature, then exposure, then the camera settings, newest first. */
+export function sortDarkSets(sets: readonly DarkLibrarySet[]): DarkLibrarySet[] {
+  return [...sets].sort(
+    (a, b) =>
+      a.temperatureC - b.temperatureC ||
+      a.exposureS - b.exposureS ||
+      (a.gain ?? -1) - (b.gain ?? -1) ||
+      (a.offset ?? -1) - (b.offset ?? -1) ||
+      a.binning - b.binning ||
+      b.takenOn.localeCompare(a.takenOn),
+  );
+}
+
+/** The viewer's calendar date, YYYY-MM-DD (a new hand-entered set defaults to it). */
+export function localDateYmd(now: Date = new Date()): string {
+  const y = now.getFullYear();
+  const m = String(now.getMonth() + 1).padStart(2, '0');
+  const d = String(now.getDate()).padStart(2, '0');
+  return `${y}-${m}-${d}`;
+}
+
+/** Choices of the validity setting: 1 to 12 months, 6 marked as common practice. */
+export function validityChoices(): { value: string; label: string }[] {
+  return Array.from({ length: 12 }, (_, i) => {
+    const months = i + 1;
+    const label = `${months} ${months === 1 ? 'month' : 'months'}${months === 6 ? ' (common practice)' : ''}`;
+    return { value: String(months), label };
+  });
+}
