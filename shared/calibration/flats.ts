@@ -5,6 +5,7 @@ import { createNode } from '@/shared/recipe/factory';
 import { recipeTreeSchema } from '@/shared/recipe/schema';
 import { filterRefSchema } from '@/shared/recipe/steps';
 import type { RecipeNode, RecipeTree } from '@/shared/recipe/types';
+import { angleDiffDeg, wrap360 } from '@/shared/calibration/sky-geometry';
 
 /*
  * Flats are valid while optical train, focus, filter and rotator angle are unchanged
@@ -19,18 +20,11 @@ export const FLAT_FOCUS_TOLERANCE_STEPS = 1;
 /** Flats count for a night when taken that night or up to this many days later (Nightloom choice: panel flats the next day or two, before the train is touched). */
 export const FLAT_VALID_DAYS_AFTER = 3;
 
-const wrap360 = (deg: number) => ((deg % 360) + 360) % 360;
 
 /** A rotator angle rounded to 0.1°, in [0, 360). */
 export function roundRotatorDeg(deg: number): number {
   const r = Math.round(wrap360(deg) * 10) / 10;
   return r >= 360 ? 0 : r;
-}
-
-/** Smallest difference between two angles, degrees (0..180). */
-function angleDiffDeg(a: number, b: number): number {
-  const d = wrap360(a - b);
-  return Math.min(d, 360 - d);
 }
 
 const sameFilter = (a: string | null, b: string | null) => (a === null || b === null ? a === b : a.trim().toLowerCase() === b.trim().toLowerCase());
