@@ -13,8 +13,7 @@ import { recipeTreeSchema } from '@/shared/recipe/schema';
 import type { RecipeTree } from '@/shared/recipe/types';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
 import { captureShareSchema, continueRequestSchema, type RecordedFraming } from '@/shared/schemas/calibration-api';
-import { createRecipe } from './calibration';
-import { derived, recordRevision, toRecipe } from './recipes';
+import { createRecipe, derived, recordRevision, toRecipe } from './recipes';
 import { findDefaultSite } from './sites';
 import { parseBody, parseId } from './validate';
 
@@ -147,8 +146,8 @@ export function historyRouter(db: Database): Router {
     }
     const siteRow = await findDefaultSite(db, ownerId);
     const tree: RecipeTree = { children: [createNode('cool', {}), stage, createNode('warm', {}), createNode('park', {})] };
-    const recipeId = await createRecipe(db, { ownerId, name: `Continue ${ref.designation}`, rigId: rigRow?.id ?? null, siteId: siteRow?.id ?? null, tree });
-    res.status(201).json({ recipeId, skippedFilters: skipped });
+    const created = await createRecipe(db, { ownerId, name: `Continue ${ref.designation}`, rigId: rigRow?.id ?? null, siteId: siteRow?.id ?? null, tree });
+    res.status(201).json({ recipeId: created.id, skippedFilters: skipped });
   });
 
   // Sharing is explicit and per club: only the target's summary (never frames) is shown there.

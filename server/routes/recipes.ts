@@ -5,6 +5,7 @@ import { dryRun, recipe, recipeRevision, rig, site, target } from '@/db/schema';
 import { HttpError, notFound } from '@/server/errors';
 import { recipeCreateSchema, recipeListQuerySchema, recipeSaveSchema, type RecipeDetail, type RecipeListItem } from '@/shared/schemas/recipe-api';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
+import { recipeTreeSchema } from '@/shared/recipe/schema';
 import { emptyRecipe, starterRecipe, copyRecipe } from '@/shared/recipe/starters';
 import { countNodes } from '@/shared/recipe/tree';
 import { targetIds, totals } from '@/shared/recipe/summary';
@@ -46,7 +47,7 @@ async function ownRecipe(db: Database | Tx, ownerId: string, id: string, opts: {
 }
 
 /** A rig or site named by a recipe must be the user's own: a 400 field error otherwise. */
-async function checkLinks(db: Database | Tx, ownerId: string, links: { rigId: string | null; siteId: string | null }) {
+export async function checkLinks(db: Database | Tx, ownerId: string, links: { rigId: string | null; siteId: string | null }) {
   const fields: Record<string, string[]> = {};
   if (links.rigId && !(await db.select({ id: rig.id }).from(rig).where(and(eq(rig.id, links.rigId), eq(rig.ownerId, ownerId))))[0]) fields.rigId = ['No such rig'];
   if (links.siteId && !(await db.select({ id: site.id }).from(site).where(and(eq(site.id, links.siteId), eq(site.ownerId, ownerId))))[0]) fields.siteId = ['No such site'];
@@ -57,6 +58,23 @@ async function checkLinks(db: Database | Tx, ownerId: string, links: { rigId: st
 export async function recordRevision(tx: Tx, row: RecipeRow) {
   await tx.insert(recipeRevision).values({ recipeId: row.id, version: row.version, name: row.name, notes: row.notes, tree: row.tree, nodeCount: row.nodeCount });
   await tx.delete(recipeRevision).where(and(eq(recipeRevision.recipeId, row.id), lt(recipeRevision.version, row.version - REVISIONS_KEPT + 1)));
+}
+
+/**
+ * Stores a new recipe and its first revision in one transaction (rig and site already checked
+ * with `checkLinks`). The tree is parsed again, so no caller stores one the schema refuses; the
+ * name is cut to the schema's 80 characters.
+ */
+export async function createRecipe(db: Database, values: { ownerId: string; name: string; notes?: string; rigId: string | null; siteId: string | null; tree: RecipeTree }): Promise<RecipeRow> {
+  const tree = recipeTreeSchema.parse(values.tree);
+  return db.transaction(async (tx) => {
+    const [created] = await tx
+      .insert(recipe)
+      .values({ ...values, name: values.name.slice(0, 80), notes: values.notes ?? '', tree, ...derived(tree) })
+      .returning();
+    await recordRevision(tx, created!);
+    return created!;
+  });
 }
 
 /** The starting tree of a new recipe (see `recipeStartSchema`). */
@@ -125,14 +143,7 @@ export function recipesRouter(db: Database): Router {
     const body = parseBody(recipeCreateSchema, req);
     await checkLinks(db, ownerId, body);
     const { tree, name } = await startingTree(db, ownerId, body);
-    const row = await db.transaction(async (tx) => {
-      const [created] = await tx
-        .insert(recipe)
-        .values({ ownerId, name: body.name ?? name, notes: body.notes, rigId: body.rigId, siteId: body.siteId, tree, ...derived(tree) })
-        .returning();
-      await recordRevision(tx, created!);
-      return created!;
-    });
+    const row = await createRecipe(db, { ownerId, name: body.name ?? name, notes: body.notes, rigId: body.rigId, siteId: body.siteId, tree });
     res.status(201).json({ recipe: toRecipe(row) });
   });
 

@@ -40,6 +40,7 @@ async function checkOwnLinks(db: Database, userId: string, body: ReturnType<type
  */
 export async function useTemplate(db: Database, userId: string, t: TemplateRow, req: Request): Promise<RecipeDetail> {
   const body = parseBody(templateUseSchema, req);
+  if (t.retiredAt) throw new HttpError(409, 'template-retired', 'This template is retired: members can no longer use it');
   const version = body.version ?? t.latestVersion;
   const [v] = await db.select().from(clubTemplateVersion).where(and(eq(clubTemplateVersion.templateId, t.id), eq(clubTemplateVersion.version, version)));
   if (!v) throw body.version === undefined ? notFound('No such version') : invalid({ version: ['No such version'] });

@@ -1,6 +1,7 @@
 import type { StoredFrame } from '@/shared/calibration/types';
 import type { DarkToShoot, DarkLibrarySet } from '@/shared/schemas/calibration-api';
 import { monthsBefore } from '@/shared/dry-run/engine/darks';
+import type { DarkMatchKey } from '@/shared/dry-run/engine/record';
 import type { DarkSet } from '@/shared/dry-run/types';
 import { createNode } from '@/shared/recipe/factory';
 import { recipeTreeSchema } from '@/shared/recipe/schema';
@@ -9,14 +10,8 @@ import type { RecipeNode, RecipeTree } from '@/shared/recipe/types';
 /** Most exposures one darks step holds (the recipe schema's limit). */
 export const DARKS_STEP_MAX_EXPOSURES = 50;
 
-/** The settings a dark set is told apart by (trade-defaults.md "darks match on", S17, S44), plus its night. */
-interface DarkGroupKey {
-  exposureS: number;
-  gain: number | null;
-  offset: number | null;
-  binning: number;
-  readoutMode: string | null;
-  temperatureC: number;
+/** The settings a dark set is told apart by (the dry run's `DarkMatchKey`), plus its night. */
+interface DarkGroupKey extends DarkMatchKey {
   nightDate: string;
 }
 

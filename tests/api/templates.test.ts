@@ -83,6 +83,12 @@ describe('template permission matrix', () => {
     expect((await c.member.agent.get(base())).body.templates.map((t: { id: string }) => t.id)).not.toContain(t1);
     expect((await c.member.agent.get(`${base()}?retired=1`)).body.templates.map((t: { id: string }) => t.id)).not.toContain(t1);
     expect((await c.admin.agent.get(`${base()}?retired=1`)).body.templates.map((t: { id: string }) => t.id)).toContain(t1);
+    // A retired template cannot be used any more, even through an old link, and nothing is stored.
+    const before = (await c.member.agent.get('/api/recipes')).body.recipes.length as number;
+    const used = await c.member.agent.post(`${base()}/${t1}/use`).set('Origin', ORIGIN).send({ rigId: null });
+    expect(used.status).toBe(409);
+    expect(used.body.error.code).toBe('template-retired');
+    expect((await c.member.agent.get('/api/recipes')).body.recipes.length).toBe(before);
   });
 
   it("another club's owner cannot reach this club's template through their own club (404)", async () => {

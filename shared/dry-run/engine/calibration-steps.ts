@@ -96,7 +96,8 @@ function skyFlatWindow(sim: Sim, node: NodeOf<'flats'>, scope: Scope, durationS:
   const endMs = sim.t + durationS * 1000;
   if (endMs <= closes) return null;
   const left = Math.max(0, (closes - sim.t) / 1000);
-  sim.out.finding({ code: 'daylight', severity: 'warn', ms: sim.t, nodeId: node.id, message: `These sky flats need ${minutes(durationS)} from ${hhmm(sim, sim.t)}, but the ${evening ? 'dusk' : 'dawn'} window (Sun ${n(w.fromDeg)}° to ${n(w.toDeg)}°) has ${minutes(left)} left`, fix: 'Take fewer flats or filters per twilight, start them as the window opens, or use a panel' });
+  // One finding per twilight window: the first flats step that overruns it (later ones overrun too).
+  sim.out.finding({ code: 'daylight', severity: 'warn', ms: sim.t, nodeId: node.id, key: `daylight|sky-flats|${evening ? 'dusk' : 'dawn'}`, message: `These sky flats need ${minutes(durationS)} from ${hhmm(sim, sim.t)}, but the ${evening ? 'dusk' : 'dawn'} window (Sun ${n(w.fromDeg)}° to ${n(w.toDeg)}°) has ${minutes(left)} left`, fix: 'Take fewer flats or filters per twilight, start them as the window opens, or use a panel' });
   return null;
 }
 

@@ -1,9 +1,9 @@
-import type { LightUse } from '@/shared/dry-run/engine/record';
+import type { DarkMatchKey } from '@/shared/dry-run/engine/record';
 import type { Sim } from '@/shared/dry-run/engine/state';
 import { n } from '@/shared/dry-run/engine/text';
 import type { DarkSet, DarksNeeded } from '@/shared/dry-run/types';
 
-type DarkKey = Omit<LightUse, 'nodeId' | 'frames'>;
+type DarkKey = DarkMatchKey;
 
 /**
  * Darks match on exposure, gain, offset, binning, readout mode and set-point ±1 °C

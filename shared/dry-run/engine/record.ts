@@ -12,15 +12,22 @@ export interface FindingDraft {
   key?: string;
 }
 
-/** Light frames of one kind, for the darks the night needs. */
-export interface LightUse {
-  nodeId: string;
+/**
+ * The settings a dark must share with the lights it calibrates (trade-defaults.md "darks match
+ * on", S17, S44): the key of the dry run's dark matching and of the library's grouped sets.
+ */
+export interface DarkMatchKey {
   exposureS: number;
   gain: number | null;
   offset: number | null;
   binning: number;
   readoutMode: string | null;
   temperatureC: number;
+}
+
+/** Light frames of one kind, for the darks the night needs. */
+export interface LightUse extends DarkMatchKey {
+  nodeId: string;
   frames: number;
 }
 
@@ -41,7 +48,7 @@ export class Recorder {
   /** A sky-flats step runs in the morning twilight (then parking after sunrise is expected). */
   dawnSkyFlats = false;
   /** Dark sets a darks step takes tonight. */
-  readonly darksTaken: Omit<LightUse, 'nodeId' | 'frames'>[] = [];
+  readonly darksTaken: DarkMatchKey[] = [];
 
   constructor(private readonly paths: Map<string, string>) {}
 
