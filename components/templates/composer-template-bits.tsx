@@ -28,9 +28,9 @@ export function TemplateNewerNotice({ recipeId }: { recipeId: string }) {
   return (
     <Banner tone="info" title={`“${o.title}” has version ${o.latestVersion}`} message={`This recipe started from version ${o.version}.`} testID="composer-template-newer">
       <Button label={comparing ? 'Hide changes' : 'Compare'} size="small" variant="secondary" onPress={() => setComparing((c) => !c)} testID="composer-template-compare" />
-      <Button label="Open template" size="small" variant="ghost" onPress={() => router.push({ pathname: '/clubs/[id]/templates/[templateId]', params: { id: o.clubId, templateId: o.templateId } })} />
+      <Button label="Open template" size="small" variant="ghost" testID="composer-template-open" onPress={() => router.push({ pathname: '/clubs/[id]/templates/[templateId]', params: { id: o.clubId, templateId: o.templateId } })} />
       {comparing && diff.data ? (
-        <View style={styles.changes}>
+        <View style={styles.changes} testID="composer-template-changes">
           {diff.data.changes.length === 0 ? <AppText variant="small" tone="muted">No differences in the steps.</AppText> : null}
           {diff.data.changes.slice(0, 30).map((c) => (
             <AppText key={`${c.kind}-${c.path}`} variant="small" tabular>{`${c.kind} ${c.path}: ${show(c.before)} → ${show(c.after)}`}</AppText>

@@ -24,7 +24,7 @@ function NewVersionForm({ admin }: { admin: Admin }) {
     <View style={styles.block}>
       <AppText weight="semibold">New version from one of my recipes</AppText>
       {admin.newVersion.error ? <Banner tone="danger" title="Could not publish the version" message={cleanError(admin.newVersion.error)} /> : null}
-      {done && !admin.newVersion.error ? <Banner tone="ok" title="Version published" message="Members who used this template are told by e-mail unless they opted out." /> : null}
+      {done && !admin.newVersion.error ? <Banner tone="ok" title="Version published" message="Members who used this template are told by e-mail unless they opted out." testID="template-version-published" /> : null}
       <RecipePicker value={recipeId} onChange={setRecipeId} testID="template-version-recipe" />
       <TextField label="Changelog" value={changelog} onChangeText={setChangelog} maxLength={500} testID="template-version-changelog" />
       <View style={styles.row}>
@@ -64,7 +64,7 @@ export function TemplateAdmin({ template }: { template: TemplateDetail }) {
       <View style={styles.block}>
         {admin.retire.error ? <Banner tone="danger" title="Could not retire" message={cleanError(admin.retire.error)} /> : null}
         {template.retired ? (
-          <AppText tone="muted">Retired: members can no longer use it; their copies stay.</AppText>
+          <AppText tone="muted" testID="template-retired">Retired: members can no longer use it; their copies stay.</AppText>
         ) : confirmRetire ? (
           <View style={styles.row}>
             <Button label="Retire it" variant="danger" size="small" onPress={() => admin.retire.mutate()} pending={admin.retire.isPending} testID="template-retire-confirm" />
