@@ -13,10 +13,12 @@ export const historyKeys = {
   all: ['history'] as const,
   list: () => [...historyKeys.all, 'list'] as const,
   target: (id: string) => [...historyKeys.all, 'target', id] as const,
+  object: (label: string) => [...historyKeys.all, 'object', label] as const,
   clubCaptures: (clubId: string) => [...historyKeys.all, 'club', clubId] as const,
 };
 
 const targetPath = (id: string) => `/api/history/targets/${encodeURIComponent(id)}`;
+const objectPath = (label: string) => `/api/history/objects/${encodeURIComponent(label)}`;
 
 /** Every target with recorded lights (and the lights no target matched, by OBJECT). */
 export function useHistoryQuery() {
@@ -33,6 +35,16 @@ export function useTargetHistoryQuery(targetId: string) {
     queryFn: ({ signal }) => api.get<TargetHistory>(targetPath(targetId), signal),
     staleTime: HISTORY_STALE_MS,
     enabled: targetId.length > 0,
+  });
+}
+
+/** The lights no target matched whose OBJECT is `label` (a history row with a null target id). */
+export function useObjectHistoryQuery(label: string) {
+  return useQuery({
+    queryKey: historyKeys.object(label),
+    queryFn: ({ signal }) => api.get<TargetHistory>(objectPath(label), signal),
+    staleTime: HISTORY_STALE_MS,
+    enabled: label.length > 0,
   });
 }
 

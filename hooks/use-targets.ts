@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import { historyKeys } from '@/hooks/use-history';
 import { api, isApiError } from '@/lib/api';
 import { bytesBlob, sendBody } from '@/lib/upload';
 import type { Framing, FramingInput, Target, TargetInput } from '@/shared/schemas/target';
@@ -33,9 +34,10 @@ export function useTargetQuery(id: string) {
   });
 }
 
+/** Capture history links lights to targets and framings when read, so it changes with the list. */
 function useInvalidateTargets() {
   const queryClient = useQueryClient();
-  return () => queryClient.invalidateQueries({ queryKey: targetKeys.all });
+  return () => Promise.all([queryClient.invalidateQueries({ queryKey: targetKeys.all }), queryClient.invalidateQueries({ queryKey: historyKeys.all })]);
 }
 
 export function useAddTargetMutation() {

@@ -1,6 +1,5 @@
 import { StyleSheet, View } from 'react-native';
 
-import { FolderPicker } from '@/components/calibration/folder-picker';
 import { IntakeProgress } from '@/components/calibration/intake-progress';
 import { IntakeResultPanel } from '@/components/calibration/intake-result';
 import type { IntakeFlow } from '@/components/calibration/use-intake';
@@ -33,7 +32,7 @@ export function IntakeSection({ flow }: { flow: IntakeFlow }) {
     >
       <View style={styles.buttons}>
         <FilePicker label="Pick FITS files…" accept={FITS_ACCEPT} multiple variant="primary" onFiles={(files) => flow.pick(files, 'files')} disabled={busy} testID="intake-files" />
-        <FolderPicker label="Pick a folder…" onFiles={(files) => flow.pick(files, 'folder')} disabled={busy} testID="intake-folder" />
+        <FilePicker label="Pick a folder…" directory onFiles={(files) => flow.pick(files, 'folder')} disabled={busy} testID="intake-folder" />
       </View>
       {busy ? <IntakeProgress flow={flow} /> : null}
       {flow.pickError ? <Banner tone="danger" title="Nothing to import" message={flow.pickError} testID="intake-pick-error" /> : null}

@@ -17,26 +17,19 @@ export function matchText(f: RecordedFraming, framings: readonly Framing[]): str
   return f.framingFlipped ? `Your framing “${name}”, turned by 180°` : `Your framing “${name}”`;
 }
 
-function FramingItem({ f, framings, selected, onSelect }: { f: RecordedFraming; framings: readonly Framing[]; selected: boolean; onSelect: () => void }) {
+function FramingItem({ f, framings, selected, onSelect }: { f: RecordedFraming; framings: readonly Framing[]; selected: boolean; onSelect?: () => void }) {
   const styles = useThemedStyles(makeStyles);
   const flipped = f.flippedFrames > 0;
-  return (
-    <Pressable
-      role="radio"
-      aria-checked={selected}
-      accessibilityState={{ selected }}
-      accessibilityLabel={`Framing at ${degreesText(f.positionAngleDeg)}, ${integrationText(f.seconds + f.flippedSeconds)}`}
-      onPress={onSelect}
-      testID={`history-framing-${f.key}`}
-      style={({ hovered }: WebPressState) => [styles.item, hovered && styles.hover, selected && styles.selected]}
-    >
+  const total = integrationText(f.seconds + f.flippedSeconds);
+  const body = (
+    <>
       <View style={styles.top}>
-        <View style={[styles.radio, selected && styles.radioOn]} />
+        {onSelect ? <View style={[styles.radio, selected && styles.radioOn]} /> : null}
         <AppText weight="semibold" tabular style={styles.grow}>
           {`PA ${degreesText(f.positionAngleDeg)}${flipped ? ` and ${degreesText(flippedAngle(f.positionAngleDeg))}` : ''}`}
         </AppText>
         <AppText weight="semibold" tabular>
-          {integrationText(f.seconds + f.flippedSeconds)}
+          {total}
         </AppText>
       </View>
       <AppText variant="small" tone="muted" tabular>
@@ -45,26 +38,58 @@ function FramingItem({ f, framings, selected, onSelect }: { f: RecordedFraming; 
       <AppText variant="small" tone="muted" tabular>
         {byFilterText(f.byFilter)}
       </AppText>
-      <AppText variant="small" tone={f.framingId ? 'ok' : 'accent'} testID="history-framing-match">
-        {matchText(f, framings)}
-      </AppText>
+      {onSelect ? (
+        <AppText variant="small" tone={f.framingId ? 'ok' : 'accent'} testID="history-framing-match">
+          {matchText(f, framings)}
+        </AppText>
+      ) : null}
       {flipped ? (
         <AppText variant="small" tone="accent" testID="history-framing-flipped">
           {`${countText(f.flippedFrames, 'frame', 'frames')} at ${degreesText(flippedAngle(f.positionAngleDeg))}: the camera turned with a meridian flip.`}
         </AppText>
       ) : null}
+    </>
+  );
+  if (!onSelect) {
+    return (
+      <View style={styles.item} role="listitem" testID={`history-framing-${f.key}`}>
+        {body}
+      </View>
+    );
+  }
+  return (
+    <Pressable
+      role="radio"
+      aria-checked={selected}
+      accessibilityState={{ selected }}
+      accessibilityLabel={`Framing at ${degreesText(f.positionAngleDeg)}, ${total}`}
+      onPress={onSelect}
+      testID={`history-framing-${f.key}`}
+      style={({ hovered }: WebPressState) => [styles.item, hovered && styles.hover, selected && styles.selected]}
+    >
+      {body}
     </Pressable>
   );
 }
 
-type RecordedFramingsProps = { framings: readonly RecordedFraming[]; targetFramings: readonly Framing[]; selectedKey: string | null; onSelect: (key: string) => void };
+type RecordedFramingsProps = {
+  framings: readonly RecordedFraming[];
+  /** The target's own framings; none for lights without a target. */
+  targetFramings?: readonly Framing[];
+  selectedKey?: string | null;
+  /** Makes the list a choice (to continue at one); without it the framings are only listed. */
+  onSelect?: (key: string) => void;
+};
 
-/** The framings the lights were taken at (centre within 1′, PA modulo 180°), and which of the target's framings each one is. */
-export function RecordedFramings({ framings, targetFramings, selectedKey, onSelect }: RecordedFramingsProps) {
+/**
+ * The framings the lights were taken at (centre within 1′, PA modulo 180°); as a choice, also
+ * which of the target's framings each one is.
+ */
+export function RecordedFramings({ framings, targetFramings = [], selectedKey = null, onSelect }: RecordedFramingsProps) {
   return (
-    <View style={listStyle.list} role="radiogroup" accessibilityLabel="Recorded framings" testID="history-framings">
+    <View style={listStyle.list} role={onSelect ? 'radiogroup' : 'list'} accessibilityLabel="Recorded framings" testID="history-framings">
       {framings.map((f) => (
-        <FramingItem key={f.key} f={f} framings={targetFramings} selected={f.key === selectedKey} onSelect={() => onSelect(f.key)} />
+        <FramingItem key={f.key} f={f} framings={targetFramings} selected={f.key === selectedKey} onSelect={onSelect ? () => onSelect(f.key) : undefined} />
       ))}
     </View>
   );

@@ -1,9 +1,9 @@
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 
 import { AppText } from '@/components/ui/app-text';
 import type { TypeVariant } from '@/constants/theme';
 
-type TextLinkProps = { href: string; label: string; testID?: string; variant?: TypeVariant };
+type TextLinkProps = { href: Href; label: string; testID?: string; variant?: TypeVariant };
 
 /** An in-app link styled as accent text (an `<a href>` on the web). */
 export function TextLink({ href, label, testID, variant = 'body' }: TextLinkProps) {

@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
 import { cameraFrame, type CameraFrameSpec } from '../helpers/fits';
-import { expectSignedIn, signUpThroughUi, snap, uniqueEmail } from './support';
+import { expectSignedIn, openSection, signUpThroughUi, snap, uniqueEmail } from './support';
 
 /*
  * Issue 8 "done means", in the browser against the real server: a folder of synthetic camera
@@ -14,6 +14,9 @@ import { expectSignedIn, signUpThroughUi, snap, uniqueEmail } from './support';
  * save (409) and an intake set is forgotten. The target's history shows the chart, the nights
  * and the flip question; "Continue this target" makes a recipe whose dry run finds the 300 s
  * darks missing, and the darks recipe opens in the composer with a darks step.
+ * Lights of objects the user has no target for (M 42, Sh2-240) get rows of their own: one opens
+ * its history by OBJECT and is added from the built-in list, the other is added at its recorded
+ * centre from the row; both rows then become target rows with their integration.
  */
 
 type Api<T> = { status: number; body: T };
@@ -86,15 +89,6 @@ function writeFolder(): { dir: string; extra: string; brokenName: string } {
   return { dir, extra, brokenName };
 }
 
-/** Calibration sits under "More" on phones. */
-async function openCalibration(page: Page) {
-  const link = page.getByTestId('nav-calibration');
-  const more = page.getByTestId('nav-more');
-  if (!(await link.isVisible()) && (await more.isVisible())) await more.click();
-  await link.click();
-  await expect(page.getByTestId('calibration-screen')).toBeVisible();
-}
-
 /** Phones switch between the screen's parts; wide screens show them all. */
 async function showPart(page: Page, part: 'frames' | 'darks' | 'flats' | 'history', isPhone: boolean) {
   if (isPhone) await page.getByTestId(`calibration-tab-${part}`).click();
@@ -119,14 +113,15 @@ test('frames from a folder fill the dark library, flats and history; continuing 
   expect(club.status).toBe(200);
 
   // Pick the folder. The upload is held back a moment so its progress can be seen.
-  await openCalibration(page);
+  await openSection(page, 'calibration');
+  await expect(page.getByTestId('calibration-screen')).toBeVisible();
   await page.route('**/api/calibration/intake', async (route) => {
     await new Promise((r) => setTimeout(r, 1500));
     await route.continue();
   });
   await page.getByTestId('intake-folder-input').setInputFiles(dir);
   await expect(page.getByTestId('intake-progress')).toBeVisible();
-  await expect(page.getByTestId('intake-progress-text')).toHaveText(/^(Reading headers \d+ \/ 19|Sending the headers: .+|Sent\. Recording the frames…)$/);
+  await expect(page.getByTestId('intake-progress-text')).toHaveText(/^(Reading headers \d+ \/ 19|Sending the headers(…|: .+ of .+)|Sent\. Recording the frames…)$/);
   await snap(page, info, 'calibration-01-progress');
   await expect(page.getByTestId('intake-recorded')).toContainText('Recorded 10 lights, 5 darks and 3 flats');
   await expect(page.getByTestId('intake-recorded')).toContainText('1 other file in the folder skipped');
@@ -262,7 +257,8 @@ test('a flats recipe for a night returns the rotator and focuser to the lights�
   await expectSignedIn(page);
   const site = await api(page, 'POST', '/api/sites', { name: 'Beech Hill', latitudeDeg: 47, longitudeDeg: 8, elevationM: 700, timeZone: 'Europe/Zurich', isDefault: true });
   expect(site.status).toBe(201);
-  await openCalibration(page);
+  await openSection(page, 'calibration');
+  await expect(page.getByTestId('calibration-screen')).toBeVisible();
   await page.getByTestId('intake-folder-input').setInputFiles(dir);
   await expect(page.getByTestId('intake-recorded')).toContainText('Recorded 10 lights');
   await showPart(page, 'flats', isPhone);
@@ -277,5 +273,105 @@ test('a flats recipe for a night returns the rotator and focuser to the lights�
   await expect(angle).toHaveValue('35');
   await expect(page.getByTestId('node-editor-matchFramingOf.focuserPositionSteps-input')).not.toHaveValue('');
   await snap(page, info, 'composer-flats-positions');
+  fs.rmSync(path.dirname(dir), { recursive: true, force: true });
+});
+
+// M 42's J2000 centre as the built-in list gives it (05:35:17.3 −05:23:28); Sh2-240 is in no built-in list.
+const M42 = { raDeg: 83.8221, decDeg: -5.3911 };
+const SH2_240 = { raDeg: 84.8, decDeg: 28.03 };
+
+/** A 300 s light with a plate solution at `at`, named by OBJECT. */
+function namedLight(object: string, at: { raDeg: number; decDeg: number }, dateObs: string, filter: 'Ha' | 'OIII'): CameraFrameSpec {
+  return { type: 'Light Frame', dateObs, exposureS: 300, object, filter, gain: 100, offset: 50, binning: 1, setTempC: -10, sensorTempC: -10, wcs: { ...at, positionAngleDeg: 90, scaleArcsecPerPx: 1.46 } };
+}
+
+/** Four lights of M 42 over two nights (Ha on 20 Nov, OIII on 22 Nov 2026) and two of Sh2-240. */
+function writeUnmatchedFolder(): string {
+  const root = fs.mkdtempSync(path.join(os.tmpdir(), 'nightloom-unmatched-'));
+  const dir = path.join(root, 'winter-objects');
+  fs.mkdirSync(dir);
+  const write = (name: string, spec: CameraFrameSpec) => fs.writeFileSync(path.join(dir, name), cameraFrame(spec, { dataBytes: DATA_BYTES }));
+  ['22:00', '22:06'].forEach((t, i) => write(`M42_Ha_${i + 1}.fits`, namedLight('M 42', M42, `2026-11-20T${t}:00`, 'Ha')));
+  ['23:00', '23:06'].forEach((t, i) => write(`M42_OIII_${i + 1}.fits`, namedLight('M 42', M42, `2026-11-22T${t}:00`, 'OIII')));
+  ['01:00', '01:06'].forEach((t, i) => write(`Sh2-240_Ha_${i + 1}.fits`, namedLight('Sh2-240', SH2_240, `2026-11-21T${t}:00`, 'Ha')));
+  return dir;
+}
+
+test('lights of objects without a target: open their history, add them as targets, and their rows become target rows', async ({ page }, info) => {
+  test.setTimeout(90_000);
+  const isPhone = info.project.name === 'phone';
+  const dir = writeUnmatchedFolder();
+  await signUpThroughUi(page, 'Ilse Marrow', uniqueEmail('unmatched'));
+  await expectSignedIn(page);
+  const site = await api(page, 'POST', '/api/sites', { name: 'Beech Hill', latitudeDeg: 47, longitudeDeg: 8, elevationM: 700, timeZone: 'Europe/Zurich', isDefault: true });
+  expect(site.status).toBe(201);
+
+  await openSection(page, 'calibration');
+  await expect(page.getByTestId('calibration-screen')).toBeVisible();
+  await page.getByTestId('intake-folder-input').setInputFiles(dir);
+  await expect(page.getByTestId('intake-recorded')).toContainText('Recorded 6 lights');
+
+  // Two rows for frames no target matches, by OBJECT.
+  await showPart(page, 'history', isPhone);
+  const unmatched = page.getByTestId('history-row-unmatched');
+  await expect(unmatched).toHaveCount(2);
+  const m42Row = unmatched.filter({ hasText: 'M 42' });
+  const sh2Row = unmatched.filter({ hasText: 'Sh2-240' });
+  await expect(m42Row).toContainText('20 min');
+  await expect(m42Row).toContainText('2 nights');
+  await expect(sh2Row).toContainText('10 min');
+
+  // Sh2-240 is in no catalogue: the row offers a target at the frames' recorded centre.
+  await sh2Row.getByTestId('history-row-unmatched-add').click();
+  await expect(sh2Row.getByTestId('history-object-add-offer')).toContainText('No catalogue object is named “Sh2-240”');
+  await expect(sh2Row.getByTestId('history-object-add-offer')).toContainText('05:39:12.0  +28:01:48');
+  await sh2Row.scrollIntoViewIfNeeded();
+  await snap(page, info, 'calibration-06-unmatched');
+  await expect(sh2Row.getByTestId('history-object-add-submit')).toHaveText('Add Sh2-240 as a target');
+  await sh2Row.getByTestId('history-object-add-submit').click();
+  await expect(unmatched).toHaveCount(1);
+  const targets = await api<{ targets: { id: string; designation: string; raDeg: number; decDeg: number; type: string }[] }>(page, 'GET', '/api/targets');
+  const sh2 = targets.body.targets.find((t) => t.designation === 'Sh2-240')!;
+  expect(sh2).toMatchObject({ type: 'other' });
+  expect(sh2.raDeg).toBeCloseTo(SH2_240.raDeg, 3);
+  expect(sh2.decDeg).toBeCloseTo(SH2_240.decDeg, 3);
+  await expect(page.getByTestId(`history-row-${sh2.id}`)).toContainText('10 min');
+
+  // M 42's history by OBJECT: totals, chart, nights and framing; nothing to continue or share.
+  await m42Row.getByTestId('history-row-unmatched-open').click();
+  await expect(page).toHaveURL(/\/calibration\/objects\/M(%20| )42$/);
+  await expect(page.getByTestId('object-history')).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'M 42', exact: true })).toBeVisible();
+  await expect(page.getByTestId('history-total')).toHaveText('20 min');
+  await expect(page.getByTestId('history-filter-Ha')).toContainText('2 frames');
+  await expect(page.getByTestId('history-filter-OIII')).toContainText('2 frames');
+  await expect(page.getByTestId('history-chart')).toBeVisible();
+  await expect(page.getByTestId('history-night-2026-11-20')).toContainText('0:10');
+  await expect(page.getByTestId('history-night-2026-11-22')).toContainText('0:10');
+  await expect(page.getByTestId('history-framings').getByRole('listitem')).toHaveCount(1);
+  await expect(page.getByTestId('history-continue')).toHaveCount(0);
+  await expect(page.getByTestId('history-share')).toHaveCount(0);
+  await expect(page.getByTestId('history-object-add-section')).toContainText('nothing to continue or share');
+  // "M 42" finds the built-in M42.
+  await expect(page.getByTestId('history-object-add-offer')).toContainText('From the built-in list: M42 · Orion Nebula at 05:35:17.3');
+  await snap(page, info, 'history-03-object');
+  await expect(page.getByTestId('history-object-add-submit')).toHaveText('Add M42 · Orion Nebula as a target');
+  await page.getByTestId('history-object-add-submit').click();
+
+  // The frames are now M42's: its own history, with continue and share, and a target row.
+  await expect(page).toHaveURL(/\/targets\/[0-9a-f-]{36}\/history/);
+  const m42Id = new URL(page.url()).pathname.split('/')[2]!;
+  await expect(page.getByTestId('target-history')).toBeVisible();
+  await expect(page.getByTestId('history-total')).toHaveText('20 min');
+  await expect(page.getByTestId('history-continue')).toBeVisible();
+  await expect(page.getByTestId('history-share')).toBeVisible();
+  await snap(page, info, 'history-04-object-added');
+  await page.getByTestId('history-back').click();
+  await expect(page.getByTestId('calibration-screen')).toBeVisible();
+  await expect(page.getByTestId(`history-row-${m42Id}`)).toContainText('M42 · Orion Nebula');
+  await expect(page.getByTestId(`history-row-${m42Id}`)).toContainText('20 min');
+  await expect(page.getByTestId('history-row-unmatched')).toHaveCount(0);
+  await page.getByTestId('history-list').scrollIntoViewIfNeeded();
+  await snap(page, info, 'calibration-07-added');
   fs.rmSync(path.dirname(dir), { recursive: true, force: true });
 });

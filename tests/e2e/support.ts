@@ -26,15 +26,18 @@ export async function signInThroughUi(page: Page, email: string, password = PASS
   await page.getByTestId('sign-in-submit').click();
 }
 
-export type Section = 'tonight' | 'targets' | 'setup' | 'club' | 'account' | 'mail';
+export type Section = 'tonight' | 'targets' | 'setup' | 'calibration' | 'club' | 'account' | 'mail';
 
 /**
  * Opens a section from the tab bar (phone) or side rail (wide): both carry the same testIDs.
- * On phones a section that does not fit the bar sits under "More" (`nav-more`).
+ * On phones a section that does not fit the bar sits under "More" (`nav-more`), as Calibration,
+ * Club, Account and Mail do.
  */
 export async function openSection(page: Page, id: Section) {
   const link = page.getByTestId(`nav-${id}`);
   const more = page.getByTestId('nav-more');
+  // Wait for the navigation first: right after a load neither is visible yet, and the check below would skip "More".
+  await expect(link.or(more).first()).toBeVisible();
   if (!(await link.isVisible()) && (await more.isVisible())) await more.click();
   await link.click();
 }
