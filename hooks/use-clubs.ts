@@ -83,7 +83,12 @@ export function useClubPeopleMutations(clubId: string) {
   const invalidate = useInvalidateClubs();
   const organizationId = clubId;
   const invite = useMutation({
-    mutationFn: (input: { email: string; role: ClubRole; resend?: boolean }) => unwrapAuth(authClient.organization.inviteMember({ ...input, organizationId })),
+    mutationFn: (input: { email: string; role: ClubRole }) => unwrapAuth(authClient.organization.inviteMember({ ...input, organizationId })),
+    onSettled: invalidate,
+  });
+  // Its own mutation, so a resend's outcome shows by the invitations and not under the invite form.
+  const resend = useMutation({
+    mutationFn: (input: { email: string; role: ClubRole }) => unwrapAuth(authClient.organization.inviteMember({ ...input, organizationId, resend: true })),
     onSettled: invalidate,
   });
   const revoke = useMutation({
@@ -102,7 +107,7 @@ export function useClubPeopleMutations(clubId: string) {
     mutationFn: () => unwrapAuth(authClient.organization.leave({ organizationId })),
     onSettled: invalidate,
   });
-  return { invite, revoke, changeRole, remove, leave };
+  return { invite, resend, revoke, changeRole, remove, leave };
 }
 
 export interface InvitationView {

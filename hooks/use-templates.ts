@@ -5,7 +5,7 @@ import { recipeKeys } from '@/hooks/use-recipes';
 import { api, isApiError, withQuery } from '@/lib/api';
 import type { DryRunResult } from '@/shared/dry-run/types';
 import type { RecipeTree } from '@/shared/recipe/types';
-import type { TemplateCreate, TemplateDetail, TemplateDiff, TemplateOrigin, TemplateUse as ApiTemplateUse } from '@/shared/schemas/club-api';
+import type { TemplateCreate, TemplateDetail, TemplateDiff, TemplateOrigin, TemplateUse as ApiTemplateUse, TemplateVersionNote } from '@/shared/schemas/club-api';
 import type { RecipeDetail } from '@/shared/schemas/recipe-api';
 
 /** Templates change only by publishing; a minute is fine, and our own writes invalidate. */
@@ -14,13 +14,13 @@ export const TEMPLATES_STALE_MS = 60_000;
 /** The tag suggestions of the publish form (issue 7); free tags are allowed too. */
 export const SUGGESTED_TAGS = ['broadband', 'narrowband', 'mosaic', 'short nights'] as const;
 
-export type { TemplateDetail, TemplateDiff, TemplateOrigin };
+export type { TemplateDetail, TemplateDiff, TemplateOrigin, TemplateVersionNote };
 export type TemplatePublish = TemplateCreate;
 export type TemplateUse = ApiTemplateUse;
 
 export const templateKeys = {
   all: ['templates'] as const,
-  list: (clubId: string, q: string, tag: string) => [...templateKeys.all, 'list', clubId, q, tag] as const,
+  list: (clubId: string, q: string, tag: string, withRetired = false) => [...templateKeys.all, 'list', clubId, q, tag, withRetired ? 'with-retired' : 'current'] as const,
   detail: (clubId: string, id: string) => [...templateKeys.all, 'detail', clubId, id] as const,
   origin: (recipeId: string) => [...templateKeys.all, 'origin', recipeId] as const,
   diff: (recipeId: string) => [...templateKeys.all, 'diff', recipeId] as const,
@@ -29,10 +29,12 @@ export const templateKeys = {
 const clubPath = (clubId: string) => `/api/clubs/${encodeURIComponent(clubId)}/templates`;
 const templatePath = (clubId: string, id: string) => `${clubPath(clubId)}/${encodeURIComponent(id)}`;
 
-export function useTemplatesQuery(clubId: string, q: string, tag: string) {
+/** A club's templates; `withRetired` adds retired ones (owners and admins only: members never get them). */
+export function useTemplatesQuery(clubId: string, q: string, tag: string, withRetired = false) {
   return useQuery<TemplateSummary[], Error, TemplateSummary[], ReturnType<typeof templateKeys.list>>({
-    queryKey: templateKeys.list(clubId, q, tag),
-    queryFn: ({ signal }) => api.get<{ templates: TemplateSummary[] }>(withQuery(clubPath(clubId), { q: q.trim() || undefined, tag: tag || undefined }), signal).then((r) => r.templates),
+    queryKey: templateKeys.list(clubId, q, tag, withRetired),
+    queryFn: ({ signal }) =>
+      api.get<{ templates: TemplateSummary[] }>(withQuery(clubPath(clubId), { q: q.trim() || undefined, tag: tag || undefined, retired: withRetired ? '1' : undefined }), signal).then((r) => r.templates),
     staleTime: TEMPLATES_STALE_MS,
     placeholderData: keepPreviousData,
   });
@@ -83,6 +85,11 @@ export function unmappedBandsOf(error: unknown): string[] | null {
   const body = error.body as { error?: { bands?: unknown } } | undefined;
   const bands = body?.error?.bands;
   return Array.isArray(bands) ? bands.filter((b): b is string => typeof b === 'string') : [];
+}
+
+/** True for 409 `template-retired`: the template was retired after the page loaded (e.g. in another tab). */
+export function isTemplateRetiredError(error: unknown): boolean {
+  return isApiError(error, 409) && error.code === 'template-retired';
 }
 
 export function useUseTemplateMutation(clubId: string, id: string) {

@@ -24,7 +24,7 @@ export function ClubScreen({ clubId }: { clubId: string }) {
   const knownTags = [...new Set(templates.flatMap((t) => t.tags))];
   return (
     <Screen title={club.data.club.name} subtitle={`${members.length} ${members.length === 1 ? 'member' : 'members'}`} above={back} testID="club-screen">
-      <ClubTemplatesSection clubId={clubId} canPublish={manage} knownTags={knownTags} />
+      <ClubTemplatesSection clubId={clubId} canManage={manage} knownTags={knownTags} />
       <ClubCapturesSection clubId={clubId} />
       <MembersSection members={members} myRoles={myRoles} myUserId={user?.id} people={people} onLeft={() => router.replace('/clubs')} />
       {manage ? <InvitationsSection invitations={invitations} people={people} /> : null}

@@ -22,14 +22,15 @@ function useSettled(value: string, ms = 250): string {
   return settled;
 }
 
-/** The club's templates: search, tag chips, cards; owners and admins publish. */
-export function ClubTemplatesSection({ clubId, canPublish, knownTags }: { clubId: string; canPublish: boolean; knownTags: string[] }) {
+/** The club's templates: search, tag chips, cards; owners and admins publish and may list retired ones too. */
+export function ClubTemplatesSection({ clubId, canManage, knownTags }: { clubId: string; canManage: boolean; knownTags: string[] }) {
   const [q, setQ] = useState('');
   const [tag, setTag] = useState('');
+  const [showRetired, setShowRetired] = useState(false);
   const settledQ = useSettled(q);
-  const templates = useTemplatesQuery(clubId, settledQ, tag);
+  const templates = useTemplatesQuery(clubId, settledQ, tag, canManage && showRetired);
   const tags = [...new Set([...SUGGESTED_TAGS, ...knownTags])];
-  const publish = canPublish ? <Button label="Publish a recipe" size="small" onPress={() => router.push({ pathname: '/clubs/publish', params: { clubId } })} testID="club-publish" /> : null;
+  const publish = canManage ? <Button label="Publish a recipe" size="small" onPress={() => router.push({ pathname: '/clubs/publish', params: { clubId } })} testID="club-publish" /> : null;
   return (
     <FormSection title="Templates" description="Recipes shared in this club. Use one to get your own copy on your rig." actions={publish} testID="club-templates">
       <TextField label="Search templates" placeholder="Title or description" value={q} onChangeText={setQ} role="searchbox" autoCapitalize="none" testID="club-templates-search" />
@@ -39,6 +40,11 @@ export function ClubTemplatesSection({ clubId, canPublish, knownTags }: { clubId
           <Chip key={t} label={t} selected={tag === t} onPress={() => setTag(tag === t ? '' : t)} testID={`club-tag-${t.replace(/\s+/g, '-')}`} />
         ))}
       </View>
+      {canManage ? (
+        <View style={styles.chips}>
+          <Chip label="Show retired" role="checkbox" selected={showRetired} onPress={() => setShowRetired((v) => !v)} testID="club-templates-show-retired" />
+        </View>
+      ) : null}
       {templates.isPending ? (
         <LoadingView label="Loading templates…" />
       ) : templates.isError ? (

@@ -14,6 +14,7 @@ import { TextLink } from '@/components/ui/text-link';
 import { canManageClub, useClubsQuery } from '@/hooks/use-clubs';
 import { usePublishTemplateMutation } from '@/hooks/use-templates';
 import { cleanError } from '@/lib/clean-error';
+import { CHANGELOG_MAX_CHARS, TEMPLATE_DESCRIPTION_MAX_CHARS, TEMPLATE_TITLE_MAX_CHARS } from '@/shared/schemas/club-api';
 import { spacing } from '@/constants/theme';
 
 type Draft = { clubId: string; recipeId: string; title: string; description: string; tags: string[]; changelog: string };
@@ -55,10 +56,20 @@ export function PublishScreen({ recipeId, clubId }: { recipeId: string; clubId: 
         {publish.error ? <Banner tone="danger" title="Could not publish" message={cleanError(publish.error)} /> : null}
         <SelectField label="Club" value={draft.clubId} onChange={(v) => set({ clubId: v })} choices={clubChoices} error={errors.clubId} testID="publish-club" />
         <RecipePicker value={draft.recipeId} onChange={(v) => set({ recipeId: v })} error={errors.recipeId} testID="publish-recipe" />
-        <TextField label="Title" value={draft.title} onChangeText={(v) => set({ title: v })} error={errors.title ?? fields?.title?.[0]} maxLength={80} testID="publish-title" />
-        <TextField label="Description" value={draft.description} onChangeText={(v) => set({ description: v })} multiline numberOfLines={3} maxLength={2000} testID="publish-description" />
+        <TextField label="Title" value={draft.title} onChangeText={(v) => set({ title: v })} error={errors.title ?? fields?.title?.[0]} maxLength={TEMPLATE_TITLE_MAX_CHARS} testID="publish-title" />
+        <TextField label="Description" value={draft.description} onChangeText={(v) => set({ description: v })} multiline numberOfLines={3} maxLength={TEMPLATE_DESCRIPTION_MAX_CHARS} testID="publish-description" />
         <TagPicker tags={draft.tags} onChange={(tags) => set({ tags })} />
-        <TextField label="Changelog" value={draft.changelog} onChangeText={(v) => set({ changelog: v })} error={errors.changelog ?? fields?.changelog?.[0]} maxLength={500} testID="publish-changelog" />
+        <TextField
+          label="Changelog"
+          value={draft.changelog}
+          onChangeText={(v) => set({ changelog: v })}
+          error={errors.changelog ?? fields?.changelog?.[0]}
+          hint={`What this version is, up to ${CHANGELOG_MAX_CHARS} characters.`}
+          multiline
+          numberOfLines={3}
+          maxLength={CHANGELOG_MAX_CHARS}
+          testID="publish-changelog"
+        />
         <View style={styles.actions}>
           <Button label="Publish" onPress={submit} pending={publish.isPending} testID="publish-submit" />
         </View>

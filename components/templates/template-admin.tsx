@@ -10,6 +10,7 @@ import { FormSection } from '@/components/ui/form-section';
 import { TextField } from '@/components/ui/text-field';
 import { useTemplateAdminMutations, type TemplateDetail } from '@/hooks/use-templates';
 import { cleanError } from '@/lib/clean-error';
+import { CHANGELOG_MAX_CHARS, TEMPLATE_DESCRIPTION_MAX_CHARS, TEMPLATE_TITLE_MAX_CHARS } from '@/shared/schemas/club-api';
 import { spacing } from '@/constants/theme';
 
 type Admin = ReturnType<typeof useTemplateAdminMutations>;
@@ -26,7 +27,7 @@ function NewVersionForm({ admin }: { admin: Admin }) {
       {admin.newVersion.error ? <Banner tone="danger" title="Could not publish the version" message={cleanError(admin.newVersion.error)} /> : null}
       {done && !admin.newVersion.error ? <Banner tone="ok" title="Version published" message="Members who used this template are told by e-mail unless they opted out." testID="template-version-published" /> : null}
       <RecipePicker value={recipeId} onChange={setRecipeId} testID="template-version-recipe" />
-      <TextField label="Changelog" value={changelog} onChangeText={setChangelog} maxLength={500} testID="template-version-changelog" />
+      <TextField label="Changelog" value={changelog} onChangeText={setChangelog} hint={`What this version changes, up to ${CHANGELOG_MAX_CHARS} characters.`} multiline numberOfLines={3} maxLength={CHANGELOG_MAX_CHARS} testID="template-version-changelog" />
       <View style={styles.row}>
         <Button label="Publish new version" onPress={submit} disabled={!ready} pending={admin.newVersion.isPending} testID="template-new-version" />
       </View>
@@ -43,8 +44,8 @@ function EditForm({ template, admin }: { template: TemplateDetail; admin: Admin 
     <View style={styles.block}>
       <AppText weight="semibold">Title, description and tags</AppText>
       {admin.edit.error ? <Banner tone="danger" title="Could not save" message={cleanError(admin.edit.error)} /> : null}
-      <TextField label="Title" value={title} onChangeText={setTitle} maxLength={80} testID="template-edit-title" />
-      <TextField label="Description" value={description} onChangeText={setDescription} multiline numberOfLines={3} maxLength={2000} testID="template-edit-description" />
+      <TextField label="Title" value={title} onChangeText={setTitle} maxLength={TEMPLATE_TITLE_MAX_CHARS} testID="template-edit-title" />
+      <TextField label="Description" value={description} onChangeText={setDescription} multiline numberOfLines={3} maxLength={TEMPLATE_DESCRIPTION_MAX_CHARS} testID="template-edit-description" />
       <TagPicker tags={tags} onChange={setTags} />
       <View style={styles.row}>
         <Button label="Save" variant="secondary" onPress={submit} pending={admin.edit.isPending} testID="template-edit-save" />

@@ -44,7 +44,7 @@ export function TemplateCard({ template }: { template: TemplateSummary }) {
         ) : null}
         <TagList tags={template.tags} />
         {template.retired ? (
-          <AppText variant="caption" tone="faint">
+          <AppText variant="caption" tone="faint" testID="template-card-retired">
             Retired
           </AppText>
         ) : null}

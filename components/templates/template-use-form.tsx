@@ -12,7 +12,7 @@ import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { useRigsQuery } from '@/hooks/use-rigs';
 import { useTargetsQuery } from '@/hooks/use-targets';
-import { unmappedBandsOf, useUseTemplateMutation, type TemplateDetail } from '@/hooks/use-templates';
+import { isTemplateRetiredError, unmappedBandsOf, useUseTemplateMutation, type TemplateDetail } from '@/hooks/use-templates';
 import { cleanError } from '@/lib/clean-error';
 import { spacing } from '@/constants/theme';
 
@@ -39,10 +39,18 @@ export function TemplateUseForm({ template }: { template: TemplateDetail }) {
     use.mutate({ rigId, name: name.trim() || undefined, bandMap: map, targetIds }, { onSuccess: (recipe) => router.push({ pathname: '/recipes/[id]', params: { id: recipe.id } }), onError: (e) => setUnmapped(unmappedBandsOf(e) ?? unmapped) });
   }
 
-  if (!open) {
+  // Retired after this page loaded (another tab, another admin): the server answers 409 `template-retired`.
+  const retiredMeanwhile = isTemplateRetiredError(use.error);
+  if (!open || retiredMeanwhile || template.retired) {
     return (
       <View style={styles.start}>
-        <Button label="Use this template" onPress={() => setOpen(true)} disabled={template.retired} testID="template-use" />
+        {retiredMeanwhile ? (
+          <View style={styles.wide}>
+            <Banner tone="danger" title="Could not make your copy" message={cleanError(use.error)} testID="template-use-retired" />
+          </View>
+        ) : null}
+        <Button label="Use this template" onPress={() => setOpen(true)} disabled={template.retired || retiredMeanwhile} testID="template-use" />
+        {template.retired && !retiredMeanwhile ? <AppText variant="small" tone="muted">Retired: members can no longer use it.</AppText> : null}
         {template.myUses.length > 0 ? <AppText variant="small" tone="muted">{`You have used it ${template.myUses.length === 1 ? 'once' : `${template.myUses.length} times`}.`}</AppText> : null}
       </View>
     );
@@ -73,6 +81,7 @@ export function TemplateUseForm({ template }: { template: TemplateDetail }) {
 
 const styles = StyleSheet.create({
   start: { gap: spacing.xs, alignItems: 'flex-start' },
+  wide: { alignSelf: 'stretch' },
   bands: { gap: spacing.md },
   actions: { flexDirection: 'row', gap: spacing.sm },
 });

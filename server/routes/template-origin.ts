@@ -1,9 +1,10 @@
-import { and, desc, eq, isNull } from 'drizzle-orm';
+import { and, desc, eq, gt, isNull } from 'drizzle-orm';
 import { Router } from 'express';
 import type { Database } from '@/db/client';
 import { clubTemplate, clubTemplateVersion, member, recipe, templateUse } from '@/db/schema';
 import { notFound } from '@/server/errors';
 import { abstractRecipe } from '@/server/templates';
+import type { SuggestedTarget } from '@/shared/recipe/template';
 import { diffTemplateTrees } from '@/shared/recipe/template-diff';
 import type { RecipeTree } from '@/shared/recipe/types';
 import type { TemplateDiff, TemplateOrigin } from '@/shared/schemas/club-api';
@@ -33,9 +34,24 @@ export function recipeTemplateRouter(db: Database): Router {
 
   r.get('/:id/template-origin', async (req, res) => {
     const { use } = await originOf(db, res.locals.user.id, parseId(req.params.id, 'recipe'));
-    const origin: TemplateOrigin | null = use
-      ? { clubId: use.t.clubId, templateId: use.t.id, title: use.t.title, version: use.version, latestVersion: use.t.latestVersion, newer: use.t.latestVersion > use.version }
-      : null;
+    if (!use) {
+      res.json({ origin: null });
+      return;
+    }
+    const newer = await db
+      .select({ version: clubTemplateVersion.version, changelog: clubTemplateVersion.changelog, createdAt: clubTemplateVersion.createdAt })
+      .from(clubTemplateVersion)
+      .where(and(eq(clubTemplateVersion.templateId, use.t.id), gt(clubTemplateVersion.version, use.version)))
+      .orderBy(desc(clubTemplateVersion.version));
+    const origin: TemplateOrigin = {
+      clubId: use.t.clubId,
+      templateId: use.t.id,
+      title: use.t.title,
+      version: use.version,
+      latestVersion: use.t.latestVersion,
+      newer: use.t.latestVersion > use.version,
+      newerVersions: newer.map((v) => ({ version: v.version, changelog: v.changelog, createdAt: v.createdAt.toISOString() })),
+    };
     res.json({ origin });
   });
 
@@ -46,7 +62,8 @@ export function recipeTemplateRouter(db: Database): Router {
     if (!use) throw notFound('This recipe was not made from a club template');
     const [latest] = await db.select().from(clubTemplateVersion).where(and(eq(clubTemplateVersion.templateId, use.t.id), eq(clubTemplateVersion.version, use.t.latestVersion)));
     const mine = await abstractRecipe(db, userId, own);
-    const body: TemplateDiff = { from: use.version, to: use.t.latestVersion, changes: diffTemplateTrees(mine.tree, latest!.tree as RecipeTree) };
+    const changes = diffTemplateTrees(mine.tree, latest!.tree as RecipeTree, { fromTargets: mine.suggestedTargets, toTargets: latest!.suggestedTargets as Record<string, SuggestedTarget> });
+    const body: TemplateDiff = { from: use.version, to: use.t.latestVersion, changes };
     res.json(body);
   });
 

@@ -10,11 +10,24 @@ import type { TreeChange } from '@/shared/recipe/template-diff';
 
 const id = z.string().uuid('Not an id');
 
-export const templateTitleSchema = z.string({ error: 'Title must be text' }).trim().min(1, 'Give the template a title').max(80, 'A title has at most 80 characters');
-export const templateDescriptionSchema = z.string({ error: 'Description must be text' }).max(4000, 'A description has at most 4000 characters');
+/** Longest template title, description and changelog: the API's limits and the forms' boxes. */
+export const TEMPLATE_TITLE_MAX_CHARS = 80;
+export const TEMPLATE_DESCRIPTION_MAX_CHARS = 4000;
+export const CHANGELOG_MAX_CHARS = 2000;
+
+export const templateTitleSchema = z
+  .string({ error: 'Title must be text' })
+  .trim()
+  .min(1, 'Give the template a title')
+  .max(TEMPLATE_TITLE_MAX_CHARS, `A title has at most ${TEMPLATE_TITLE_MAX_CHARS} characters`);
+export const templateDescriptionSchema = z.string({ error: 'Description must be text' }).max(TEMPLATE_DESCRIPTION_MAX_CHARS, `A description has at most ${TEMPLATE_DESCRIPTION_MAX_CHARS} characters`);
 export const templateTagSchema = z.string({ error: 'A tag must be text' }).trim().toLowerCase().min(1, 'A tag cannot be empty').max(30, 'A tag has at most 30 characters');
 export const templateTagsSchema = z.array(templateTagSchema).max(10, 'At most 10 tags').transform((tags) => [...new Set(tags)]);
-export const changelogSchema = z.string({ error: 'Changelog must be text' }).trim().min(1, 'Say what this version is or changes').max(2000, 'A changelog has at most 2000 characters');
+export const changelogSchema = z
+  .string({ error: 'Changelog must be text' })
+  .trim()
+  .min(1, 'Say what this version is or changes')
+  .max(CHANGELOG_MAX_CHARS, `A changelog has at most ${CHANGELOG_MAX_CHARS} characters`);
 
 /** Publishing a recipe as a new template (version 1). */
 export const templateCreateSchema = z.object({
@@ -132,6 +145,13 @@ export interface TemplateVersionDetail {
   createdAt: string;
 }
 
+/** A version's changelog, as the notice about newer versions lists them. */
+export interface TemplateVersionNote {
+  version: number;
+  changelog: string;
+  createdAt: string;
+}
+
 export interface TemplateOrigin {
   clubId: string;
   templateId: string;
@@ -139,6 +159,8 @@ export interface TemplateOrigin {
   version: number;
   latestVersion: number;
   newer: boolean;
+  /** The versions after the one the recipe came from, newest first. */
+  newerVersions: TemplateVersionNote[];
 }
 
 export interface TemplateDiff {

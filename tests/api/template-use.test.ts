@@ -80,7 +80,7 @@ describe('using a template', () => {
     expect(detail.useCount).toBe(1);
     expect(detail.myUses).toEqual([{ recipeId: made.id, version: 1 }]);
     expect(detail.versions[0].useCount).toBe(1);
-    expect((await c.member.agent.get(`/api/recipes/${made.id}/template-origin`)).body.origin).toEqual({ clubId: c.clubId, templateId, title: 'Narrowband triad', version: 1, latestVersion: 1, newer: false });
+    expect((await c.member.agent.get(`/api/recipes/${made.id}/template-origin`)).body.origin).toEqual({ clubId: c.clubId, templateId, title: 'Narrowband triad', version: 1, latestVersion: 1, newer: false, newerVersions: [] });
   });
 
   it('a recipe not made from a template has no origin; another user’s recipe is 404', async () => {
@@ -110,16 +110,40 @@ describe('a new version', () => {
     const toQuiet = await h.db.select().from(devMail).where(and(sql`${devMail.to} @> ${JSON.stringify([quiet.email])}::jsonb`, eq(devMail.subject, 'New version of Narrowband triad')));
     expect(toQuiet).toEqual([]);
 
+    // The notice lists what the newer versions say, newest first.
     const origin = (await keen.agent.get(`/api/recipes/${keenCopy.id}/template-origin`)).body.origin;
     expect(origin).toMatchObject({ version: 1, latestVersion: 2, newer: true });
+    expect(origin.newerVersions).toEqual([{ version: 2, changelog: 'Longer Ha, no park', createdAt: expect.any(String) }]);
     const diff = await keen.agent.get(`/api/recipes/${keenCopy.id}/template-diff`);
     expect(diff.status).toBe(200);
     expect(diff.body.from).toBe(1);
     expect(diff.body.to).toBe(2);
+    // Each change in words (shared/recipe/summary.ts), in the stage named by the template's suggested target.
     expect(diff.body.changes).toEqual([
-      { path: '1.1', kind: 'changed', before: expect.objectContaining({ count: 12 }), after: expect.objectContaining({ count: 99 }) },
-      { path: '2', kind: 'removed', before: expect.objectContaining({ kind: 'park' }) },
+      {
+        kind: 'changed',
+        path: '1.1',
+        nodeKind: 'expose',
+        before: 'Ha 12 × 300 s, bin 1, dither every frame',
+        after: 'Ha 99 × 300 s, bin 1, dither every frame',
+        where: { within: ["stage 'NGC 7000'"], step: 2 },
+      },
+      { kind: 'removed', path: '2', nodeKind: 'park', before: 'Park the mount', where: { within: [], step: 3 } },
     ]);
+
+    // A third version: both changelogs, newest first; a copy of version 2 sees only the third.
+    const v3 = await c.owner.agent.post(`${base()}/versions`).set('Origin', ORIGIN).send({ recipeId: source.recipeId, changelog: 'Same steps, new notes' });
+    expect(v3.status).toBe(201);
+    const both = (await keen.agent.get(`/api/recipes/${keenCopy.id}/template-origin`)).body.origin;
+    expect(both.newerVersions.map((v: { version: number; changelog: string }) => [v.version, v.changelog])).toEqual([
+      [3, 'Same steps, new notes'],
+      [2, 'Longer Ha, no park'],
+    ]);
+    const quietCopy = (await use(quiet, { rigId: null, version: 2 })).body.recipe;
+    const later = (await quiet.agent.get(`/api/recipes/${quietCopy.id}/template-origin`)).body.origin;
+    expect(later).toMatchObject({ version: 2, latestVersion: 3, newer: true });
+    expect(later.newerVersions.map((v: { version: number }) => v.version)).toEqual([3]);
+    expect((await quiet.agent.get(`/api/recipes/${quietCopy.id}/template-diff`)).body.changes).toEqual([]);
     // Version 1 is still there as it was.
     expect((await keen.agent.get(`${base()}/versions/1`)).body.version.tree.children).toHaveLength(3);
   });

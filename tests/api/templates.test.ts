@@ -2,6 +2,7 @@ import { count } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { clubTemplate, clubTemplateVersion, recipe, templateUse } from '@/db/schema';
+import { CHANGELOG_MAX_CHARS } from '@/shared/schemas/club-api';
 import { clubCast, narrowbandRecipe, publish, type ClubCast } from './club-fixtures';
 import { ORIGIN, startHarness, type Harness, type TestUser } from './harness';
 
@@ -113,6 +114,11 @@ describe('template bad input: 400 with fields, nothing stored', () => {
     { name: 'create from someone else’s recipe', run: () => c.owner.agent.post(base()).set('Origin', ORIGIN).send({ recipeId: recipes.get(c.member.id), title: 'T', changelog: 'v1' }), fields: ['recipeId'] },
     { name: 'create with too many tags', run: () => c.owner.agent.post(base()).set('Origin', ORIGIN).send({ recipeId: recipes.get(c.owner.id), title: 'T', changelog: 'v1', tags: Array.from({ length: 11 }, (_, i) => `t${i}`) }), fields: ['tags'] },
     { name: 'new version without changelog', run: () => c.owner.agent.post(`${base()}/${templateId}/versions`).set('Origin', ORIGIN).send({ recipeId: recipes.get(c.owner.id) }), fields: ['changelog'] },
+    {
+      name: 'new version with a changelog one character over the limit',
+      run: () => c.owner.agent.post(`${base()}/${templateId}/versions`).set('Origin', ORIGIN).send({ recipeId: recipes.get(c.owner.id), changelog: 'x'.repeat(CHANGELOG_MAX_CHARS + 1) }),
+      fields: ['changelog'],
+    },
     { name: 'new version from a bad id', run: () => c.owner.agent.post(`${base()}/${templateId}/versions`).set('Origin', ORIGIN).send({ recipeId: 'nope', changelog: 'x' }), fields: ['recipeId'] },
     { name: 'patch with nothing to change', run: () => c.owner.agent.patch(`${base()}/${templateId}`).set('Origin', ORIGIN).send({}), fields: ['_'] },
     { name: 'patch with a long title', run: () => c.owner.agent.patch(`${base()}/${templateId}`).set('Origin', ORIGIN).send({ title: 'x'.repeat(81) }), fields: ['title'] },
@@ -137,6 +143,15 @@ describe('template bad input: 400 with fields, nothing stored', () => {
       expect({ ...after.body.template, updatedAt: '' }).toEqual({ ...detail.body.template, updatedAt: '' });
     });
   }
+
+  it('a changelog of exactly the limit the forms allow is stored whole', async () => {
+    const changelog = `Longer subs. ${'y'.repeat(CHANGELOG_MAX_CHARS - 13)}`;
+    expect(changelog).toHaveLength(CHANGELOG_MAX_CHARS);
+    const res = await c.owner.agent.post(`${base()}/${templateId}/versions`).set('Origin', ORIGIN).send({ recipeId: recipes.get(c.owner.id), changelog });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const latest = res.body.template.versions.at(-1);
+    expect(latest.changelog).toBe(changelog);
+  });
 
   it('404 for a template id that is not a uuid or not in the club, and for a missing version', async () => {
     expect((await c.member.agent.get(`${base()}/nope`)).status).toBe(404);

@@ -1,11 +1,13 @@
 import { expect, test, type Browser, type BrowserContext, type Page, type TestInfo } from '@playwright/test';
 import pg from 'pg';
+import { CHANGELOG_MAX_CHARS } from '@/shared/schemas/club-api';
 import { PASSWORD, snap, uniqueEmail } from './support';
 
 /*
  * Club administration in the browser (the API side is in tests/api/clubs.test.ts, templates.test.ts
- * and template-use.test.ts): roles, removing, leaving, resending and revoking invitations, new
- * template versions and retiring. What is not under test is set up through the API with the
+ * and template-use.test.ts): roles, removing, leaving, resending (with its confirmation or error)
+ * and revoking invitations, new template versions (changelogs and the readable change list in
+ * the recipe's notice), retiring, the managers' "Show retired" list and a use refused meanwhile. What is not under test is set up through the API with the
  * actor's own session cookies.
  */
 
@@ -143,18 +145,34 @@ test('a member leaves a club', async ({ browser }, info) => {
 test('an owner resends and revokes an invitation; the revoked link says so', async ({ browser }, info) => {
   const owner = await actor(browser, info, 'Ivo Danneker');
   const invitee = await actor(browser, info, 'Runa Holt');
+  const quick = await actor(browser, info, 'Bo Lindqvar');
   const c = await club(owner, []);
   const inv = await api<{ id: string }>(owner, 'POST', '/api/auth/organization/invite-member', { email: invitee.email, role: 'member', organizationId: c.id });
+  const quickInv = await api<{ id: string }>(owner, 'POST', '/api/auth/organization/invite-member', { email: quick.email, role: 'member', organizationId: c.id });
   const link = `/invitations/${inv.id}`;
   await expect.poll(async () => (await mailTo(invitee.email)).length).toBe(1);
 
   await owner.page.goto(c.url);
   const row = owner.page.getByTestId(`club-invitation-${invitee.email}`);
   await answered(owner.page, '/organization/invite-member', () => row.getByTestId('club-invitation-resend').click());
+  await expect(owner.page.getByTestId('club-invitation-resent')).toContainText(`Sent again to ${invitee.email}`);
   await expect.poll(async () => (await mailTo(invitee.email)).map((m) => m.text.includes(link))).toEqual([true, true]);
   await expect(row).toBeVisible();
   await row.evaluate((el) => el.scrollIntoView({ block: 'center' }));
   await snap(owner.page, info, 'clubs-admin-05-invitation');
+
+  // The other one joins in their own browser while the owner's page still lists them: the resend fails, and says why.
+  await api(quick, 'POST', '/api/auth/organization/accept-invitation', { invitationId: quickInv.id });
+  const refused = owner.page.waitForResponse((r) => new URL(r.url()).pathname.endsWith('/organization/invite-member'));
+  await owner.page.getByTestId(`club-invitation-${quick.email}`).getByTestId('club-invitation-resend').click();
+  expect((await refused).status()).toBe(400);
+  const failed = owner.page.getByTestId('club-invitation-resend-error');
+  await expect(failed).toContainText(`Could not resend to ${quick.email}`);
+  await expect(failed).toContainText('They have joined the club in the meantime, so there is nothing to resend.');
+  await expect(owner.page.getByTestId('club-invitation-resent')).toHaveCount(0);
+  await expect(owner.page.getByTestId(`club-invitation-${quick.email}`)).toHaveCount(0);
+  await failed.evaluate((el) => el.scrollIntoView({ block: 'center' }));
+  await snap(owner.page, info, 'clubs-admin-05b-resend-failed');
 
   await answered(owner.page, '/organization/cancel-invitation', () => row.getByTestId('club-invitation-revoke').click());
   await expect(row).toHaveCount(0);
@@ -196,12 +214,20 @@ test('an admin publishes a new version with a changelog; a member who used the o
   await admin.page.goto(templateUrl);
   await expect(admin.page.getByTestId('template-admin')).toBeVisible();
   await admin.page.getByTestId('template-version-recipe').selectOption({ label: 'Western Veil bicolour' });
-  await admin.page.getByTestId('template-version-changelog').fill(`${frames} frames in the first block`);
+  // Longer than the old 500-character box: the form allows what the API accepts (CHANGELOG_MAX_CHARS).
+  const changelogBox = admin.page.getByTestId('template-version-changelog');
+  await expect(changelogBox).toHaveAttribute('maxlength', String(CHANGELOG_MAX_CHARS));
+  const tail = 'Darks at the same set-point as before.';
+  const changelog = `${frames} frames in the first block. ${'Longer Ha runs make the faint filaments stand out against the background. '.repeat(8)}${tail}`;
+  expect(changelog.length).toBeGreaterThan(500);
+  await changelogBox.fill(changelog);
+  await expect(changelogBox).toHaveValue(changelog);
   const published = admin.page.waitForResponse((r) => r.url().endsWith(`/templates/${templateId}/versions`));
   await admin.page.getByTestId('template-new-version').click();
   expect((await published).status()).toBe(201);
   await expect(admin.page.getByTestId('template-version-published')).toBeVisible();
   await expect(admin.page.getByTestId('template-version-2')).toContainText(`${frames} frames in the first block`);
+  await expect(admin.page.getByTestId('template-version-2')).toContainText(tail);
   await expect(admin.page.getByTestId('template-screen')).toContainText('Version 2');
   await snap(admin.page, info, 'clubs-admin-07-new-version');
 
@@ -211,10 +237,19 @@ test('an admin publishes a new version with a changelog; a member who used the o
   const notice = member.page.getByTestId('composer-template-newer');
   await expect(notice).toContainText('“Western Veil bicolour” has version 2');
   await expect(notice).toContainText('This recipe started from version 1.');
-  await member.page.getByTestId('composer-template-compare').click();
-  await expect(member.page.getByTestId('composer-template-changes')).toContainText(/^changed [\d.]+: .*→ .*"count":\d+/);
-  await expect(member.page.getByTestId('composer-template-changes')).toContainText(`"count":${frames}`);
+  // What version 2 says, in the publisher's words.
+  await expect(member.page.getByTestId('composer-template-changelog-2')).toContainText('Version 2');
+  await expect(member.page.getByTestId('composer-template-changelog-2')).toContainText(`${frames} frames in the first block.`);
   await snap(member.page, info, 'clubs-admin-08-newer-notice');
+  // What changed, step by step in plain words: the first block's frames, in the stage named by its target.
+  await member.page.getByTestId('composer-template-compare').click();
+  const changes = member.page.getByTestId('composer-template-changes');
+  await expect(changes.getByRole('listitem')).toHaveCount(1);
+  await expect(changes).toContainText(/^Changed in stage 'NGC 6960' › Repeat until the target sinks below 30° \(step 1\): Ha 3 × 300 s, .* → Ha \d+ × 300 s/);
+  await expect(changes).toContainText(`→ Ha ${frames} × 300 s`);
+  await expect(changes).not.toContainText('"count"');
+  await changes.scrollIntoViewIfNeeded();
+  await snap(member.page, info, 'clubs-admin-08b-compare');
 
   // The template page says which version was theirs and what version 2 is.
   await member.page.getByTestId('composer-template-open').click();
@@ -236,6 +271,14 @@ test('an admin retires a template; members are no longer offered it', async ({ b
   await member.page.goto(c.url);
   await expect(member.page.getByTestId('template-card-veil-keeper')).toBeVisible();
   await expect(member.page.getByTestId('template-card-veil-old-timer')).toBeVisible();
+  await expect(member.page.getByTestId('club-templates-show-retired')).toHaveCount(0);
+
+  // In a second tab the member is about to use it when the admin retires it.
+  await api(member, 'POST', '/api/rigs', { name: 'Balcony refractor', filterWheel: { slots: HA_OIII } });
+  const otherTab = await member.context.newPage();
+  await otherTab.goto(`${c.url}/templates/${retiring}`);
+  await otherTab.getByTestId('template-use').click();
+  await otherTab.getByTestId('template-use-rig').selectOption({ label: 'Balcony refractor' });
 
   await admin.page.goto(`${c.url}/templates/${retiring}`);
   await admin.page.getByTestId('template-retire').click();
@@ -244,6 +287,34 @@ test('an admin retires a template; members are no longer offered it', async ({ b
   await expect(admin.page.getByTestId('template-screen')).toContainText('Version 1 · retired');
   await expect(admin.page.getByTestId('template-use')).toBeDisabled();
   await snap(admin.page, info, 'clubs-admin-09-retired');
+
+  // The other tab's copy is refused (409 template-retired) with the server's sentence, and the form closes.
+  const refused = otherTab.waitForResponse((r) => new URL(r.url()).pathname.endsWith(`/templates/${retiring}/use`));
+  await otherTab.getByTestId('template-use-confirm').click();
+  expect((await refused).status()).toBe(409);
+  await expect(otherTab.getByTestId('template-use-retired')).toContainText('Could not make your copy');
+  await expect(otherTab.getByTestId('template-use-retired')).toContainText('This template is retired: members can no longer use it.');
+  await expect(otherTab.getByTestId('template-use-form')).toHaveCount(0);
+  await expect(otherTab.getByTestId('template-use')).toBeDisabled();
+  await expect(otherTab.getByTestId('template-screen')).toContainText('Version 1 · retired');
+  await snap(otherTab, info, 'clubs-admin-09b-retired-meanwhile');
+  await otherTab.close();
+
+  // Owners and admins can still list it, marked retired.
+  await admin.page.goto(c.url);
+  await expect(admin.page.getByTestId('template-card-veil-keeper')).toBeVisible();
+  await expect(admin.page.getByTestId('template-card-veil-old-timer')).toHaveCount(0);
+  const withRetired = admin.page.waitForResponse((r) => r.url().includes('/templates?') && new URL(r.url()).searchParams.get('retired') === '1');
+  await admin.page.getByTestId('club-templates-show-retired').click();
+  expect((await withRetired).status()).toBe(200);
+  await expect(admin.page.getByTestId('club-templates-show-retired')).toHaveAttribute('aria-checked', 'true');
+  const retiredCard = admin.page.getByTestId('template-card-veil-old-timer');
+  await expect(retiredCard.getByTestId('template-card-retired')).toHaveText('Retired');
+  await expect(admin.page.getByTestId('template-card-veil-keeper').getByTestId('template-card-retired')).toHaveCount(0);
+  await retiredCard.scrollIntoViewIfNeeded();
+  await snap(admin.page, info, 'clubs-admin-09c-show-retired');
+  await admin.page.getByTestId('club-templates-show-retired').click();
+  await expect(admin.page.getByTestId('template-card-veil-old-timer')).toHaveCount(0);
 
   await member.page.reload();
   await expect(member.page.getByTestId('template-card-veil-keeper')).toBeVisible();

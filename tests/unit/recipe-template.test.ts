@@ -3,7 +3,6 @@ import { createNode } from '@/shared/recipe/factory';
 import { collectIds, sequentialIds } from '@/shared/recipe/ids';
 import { recipeTreeSchema } from '@/shared/recipe/schema';
 import { filterRefsOf, fromTemplateTree, stageIdsOf, toTemplateTree } from '@/shared/recipe/template';
-import { diffTemplateTrees } from '@/shared/recipe/template-diff';
 import type { RecipeNode, RecipeTree } from '@/shared/recipe/types';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
 
@@ -98,30 +97,5 @@ describe('fromTemplateTree', () => {
     const r = fromTemplateTree(template, { rig: null });
     expect(r.unmapped).toEqual([]);
     expect(filterRefsOf(r.tree)).toEqual(['Ha', 'OIII', 'SII', 'Tri-band']);
-  });
-});
-
-describe('diffTemplateTrees', () => {
-  const template = toTemplateTree(publisherTree(), { rig: narrowRig }).tree;
-
-  it('finds no change between a template and a fresh copy re-abstracted to bands', () => {
-    const copy = fromTemplateTree(template, { rig: narrowRig }).tree;
-    expect(diffTemplateTrees(toTemplateTree(copy, { rig: narrowRig }).tree, template)).toEqual([]);
-  });
-
-  it('reports changed, added and removed nodes by position', () => {
-    const next = structuredClone(template);
-    const stage = next.children[1]!;
-    if (stage.kind !== 'stage') throw new Error('fixture');
-    stage.children[1] = { ...stage.children[1]!, count: 20 } as RecipeNode;
-    stage.children.pop();
-    next.children.push(createNode('park', {}, { newId: sequentialIds(900) }));
-    const changes = diffTemplateTrees(template, next);
-    expect(changes.map((c) => [c.path, c.kind])).toEqual([
-      ['1.1', 'changed'],
-      ['1.3', 'removed'],
-      ['3', 'added'],
-    ]);
-    expect(changes[0]).toMatchObject({ before: { count: 12 }, after: { count: 20 } });
   });
 });
