@@ -10,6 +10,7 @@ import { rigInputSchema } from '@/shared/rig/schema';
 import { findBuiltinTarget } from '@/shared/targets/builtin';
 import { createAuth } from '@/server/auth';
 import { loadEnv } from '@/server/env';
+import { seedCaptures } from './captures';
 import { DEMO_CLUB, DEMO_RIG, DEMO_SITE, DEMO_TARGETS, DEMO_USERS } from './demo';
 
 const silentMailer = { send: async () => undefined, close: () => undefined };
@@ -33,6 +34,7 @@ async function main() {
       const [s] = await db.select({ id: site.id }).from(site).where(eq(site.ownerId, u.id)).limit(1);
       if (!s) await db.insert(site).values({ ...DEMO_SITE, ownerId: u.id });
       await seedRigAndTargets(db, u.id);
+      if (demo.clubRole === 'owner') await seedCaptures(db, u.id, club!.id);
     }
     console.log(`[seed] demo scenario ready: ${DEMO_USERS.map((u) => u.email).join(', ')}`);
   } finally {
