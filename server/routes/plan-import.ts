@@ -1,9 +1,9 @@
 import { eq, inArray } from 'drizzle-orm';
 import type { Database } from '@/db/client';
-import { framing, recipe, rig, site, target } from '@/db/schema';
+import { framing, rig, site, target } from '@/db/schema';
 import { remapPlanTree, type Plan } from '@/shared/plan';
 import type { RecipeTree } from '@/shared/recipe/types';
-import { derived, recordRevision, toRecipe } from './recipes';
+import { createRecipeIn, toRecipe } from './recipes';
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
 
@@ -103,10 +103,9 @@ export async function storeImport(db: Database, ownerId: string, plan: Plan, opt
     await matchFramings(tx, plan, matches, framingIds);
     const createdTargets = await createTargets(tx, ownerId, plan, matches, framingIds);
     const tree: RecipeTree = { children: remapPlanTree(plan.recipe.children, matches.targets, framingIds) };
-    const [row] = await tx.insert(recipe).values({ ownerId, name: plan.recipe.name, notes: plan.recipe.notes, rigId, siteId, tree, ...derived(tree) }).returning();
-    await recordRevision(tx, row!);
+    const row = await createRecipeIn(tx, { ownerId, name: plan.recipe.name, notes: plan.recipe.notes, rigId, siteId, tree });
     return {
-      recipe: toRecipe(row!),
+      recipe: toRecipe(row),
       created: { site: siteId !== null && siteId !== matches.site?.id, rig: rigId !== null && rigId !== matches.rig?.id, targets: createdTargets },
       linked: { site: matches.site, rig: matches.rig },
     };

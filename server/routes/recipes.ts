@@ -60,21 +60,35 @@ export async function recordRevision(tx: Tx, row: RecipeRow) {
   await tx.delete(recipeRevision).where(and(eq(recipeRevision.recipeId, row.id), lt(recipeRevision.version, row.version - REVISIONS_KEPT + 1)));
 }
 
+/** What a new recipe is made of; `notes` defaults to none. */
+export interface NewRecipe {
+  ownerId: string;
+  name: string;
+  notes?: string;
+  rigId: string | null;
+  siteId: string | null;
+  tree: RecipeTree;
+}
+
 /**
- * Stores a new recipe and its first revision in one transaction (rig and site already checked
- * with `checkLinks`). The tree is parsed again, so no caller stores one the schema refuses; the
- * name is cut to the schema's 80 characters.
+ * Stores a new recipe and its first revision inside the caller's transaction, for writes that
+ * store more with it (a plan import, a template use). Rig and site must already be checked (with
+ * `checkLinks` or the caller's own rules). The tree is parsed again, so no caller stores one the
+ * schema refuses; the name is cut to the schema's 80 characters.
  */
-export async function createRecipe(db: Database, values: { ownerId: string; name: string; notes?: string; rigId: string | null; siteId: string | null; tree: RecipeTree }): Promise<RecipeRow> {
+export async function createRecipeIn(tx: Tx, values: NewRecipe): Promise<RecipeRow> {
   const tree = recipeTreeSchema.parse(values.tree);
-  return db.transaction(async (tx) => {
-    const [created] = await tx
-      .insert(recipe)
-      .values({ ...values, name: values.name.slice(0, 80), notes: values.notes ?? '', tree, ...derived(tree) })
-      .returning();
-    await recordRevision(tx, created!);
-    return created!;
-  });
+  const [created] = await tx
+    .insert(recipe)
+    .values({ ...values, name: values.name.slice(0, 80), notes: values.notes ?? '', tree, ...derived(tree) })
+    .returning();
+  await recordRevision(tx, created!);
+  return created!;
+}
+
+/** Stores a new recipe and its first revision in a transaction of its own (see `createRecipeIn`). */
+export async function createRecipe(db: Database, values: NewRecipe): Promise<RecipeRow> {
+  return db.transaction((tx) => createRecipeIn(tx, values));
 }
 
 /** The starting tree of a new recipe (see `recipeStartSchema`). */

@@ -1,15 +1,14 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Request } from 'express';
 import type { Database } from '@/db/client';
-import { clubTemplate, clubTemplateVersion, recipe, rig, site, target, templateUse } from '@/db/schema';
+import { clubTemplate, clubTemplateVersion, rig, site, target, templateUse } from '@/db/schema';
 import { HttpError, notFound } from '@/server/errors';
-import { recipeTreeSchema } from '@/shared/recipe/schema';
 import { fromTemplateTree, stageIdsOf } from '@/shared/recipe/template';
 import type { RecipeTree } from '@/shared/recipe/types';
 import type { RigInput } from '@/shared/rig/schema';
 import type { RecipeDetail } from '@/shared/schemas/recipe-api';
 import { templateUseSchema } from '@/shared/schemas/club-api';
-import { derived, recordRevision, toRecipe } from './recipes';
+import { createRecipeIn, toRecipe } from './recipes';
 import { parseBody } from './validate';
 
 type TemplateRow = typeof clubTemplate.$inferSelect;
@@ -51,15 +50,10 @@ export async function useTemplate(db: Database, userId: string, t: TemplateRow, 
   if (made.unmapped.length) {
     throw new HttpError(400, 'unmapped-bands', `No filter in the rig for ${made.unmapped.join(', ')}: choose one for each`, { bands: made.unmapped });
   }
-  const tree = recipeTreeSchema.parse(made.tree);
   const row = await db.transaction(async (tx) => {
-    const [created] = await tx
-      .insert(recipe)
-      .values({ ownerId: userId, name: body.name ?? t.title, notes: `From the club template "${t.title}", version ${version}.`, rigId: body.rigId, siteId: body.siteId, tree, ...derived(tree) })
-      .returning();
-    await recordRevision(tx, created!);
-    await tx.insert(templateUse).values({ templateId: t.id, version, userId, recipeId: created!.id });
-    return created!;
+    const created = await createRecipeIn(tx, { ownerId: userId, name: body.name ?? t.title, notes: `From the club template "${t.title}", version ${version}.`, rigId: body.rigId, siteId: body.siteId, tree: made.tree });
+    await tx.insert(templateUse).values({ templateId: t.id, version, userId, recipeId: created.id });
+    return created;
   });
   return toRecipe(row);
 }

@@ -7,8 +7,11 @@ export const PLAN_SCHEMA_PATH = 'schemas/nightloom.plan.v1.schema.json';
 /**
  * The JSON Schema (draft 2020-12) of a plan, generated from the zod schemas that validate
  * import, as a reader sees the file (`io: 'input'`: keys with defaults may be left out).
- * Checks zod cannot express in JSON Schema (calendar dates, time zones, unique names, stage
- * targets present) are the importer's alone; the schema describes the shape and ranges.
+ * The schema describes the shape and ranges; refinements do not reach it. One that JSON Schema
+ * can state is restated beside it with `.meta()` (recorded positions of a flats step need a
+ * rotator angle, a focuser position or both: an `anyOf` of `required`), so the schema refuses it
+ * too. The rest (calendar dates, time zones, unique target ids, stage targets present, tree
+ * depth and size) are the importer's alone.
  */
 export function planJsonSchema(): Record<string, unknown> {
   const generated = z.toJSONSchema(planSchema, { io: 'input', target: 'draft-2020-12' }) as Record<string, unknown>;

@@ -140,7 +140,9 @@ export const rotatorAngleSchema = z
 /**
  * The rotator angle and focuser position the lights were taken at (from their FITS headers), for
  * flats taken later: flats are valid while optical train, focus, filter and rotator angle are
- * unchanged (trade-defaults.md "flats valid while", S18). At least one of the two.
+ * unchanged (trade-defaults.md "flats valid while", S18). At least one of the two: the
+ * refinement checks it, and the `anyOf` states it in the published JSON Schema, which cannot
+ * see refinements.
  */
 export const recordedPositionsSchema = z
   .object({
@@ -148,7 +150,8 @@ export const recordedPositionsSchema = z
     rotatorAngleDeg: rotatorAngleSchema.optional(),
     focuserPositionSteps: whole('Focuser position', 'steps', 0, 1_000_000).optional(),
   })
-  .refine((p) => p.rotatorAngleDeg !== undefined || p.focuserPositionSteps !== undefined, { message: 'Give a rotator angle, a focuser position or both' });
+  .refine((p) => p.rotatorAngleDeg !== undefined || p.focuserPositionSteps !== undefined, { message: 'Give a rotator angle, a focuser position or both' })
+  .meta({ anyOf: [{ required: ['rotatorAngleDeg'] }, { required: ['focuserPositionSteps'] }] });
 
 export const matchFramingOfSchema = z.discriminatedUnion(
   'kind',

@@ -20,9 +20,9 @@ const num = (label: string, min: number, max: number) =>
  */
 export const framingInputSchema = z.object({
   name: z.string({ error: 'Name must be text' }).trim().min(1, 'Give the framing a name').max(80, 'At most 80 characters'),
-  raDeg: num('Right ascension', 0, 360).refine((v) => v < 360, 'Right ascension must be below 360°'),
+  raDeg: z.number({ error: 'Right ascension must be a number' }).min(0, 'Right ascension must be at least 0').lt(360, 'Right ascension must be below 360°'),
   decDeg: num('Declination', -90, 90),
-  positionAngleDeg: num('Position angle', 0, 360).refine((v) => v < 360, 'Position angle must be below 360°').default(0),
+  positionAngleDeg: z.number({ error: 'Position angle must be a number' }).min(0, 'Position angle must be at least 0').lt(360, 'Position angle must be below 360°').default(0),
   mosaicCols: z.number().int('Panels are whole numbers').min(1, 'At least 1 panel').max(10, 'At most 10 panels across').default(1),
   mosaicRows: z.number().int('Panels are whole numbers').min(1, 'At least 1 panel').max(10, 'At most 10 panels down').default(1),
   overlapPct: num('Overlap', 0, 50).default(10),

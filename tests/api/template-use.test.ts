@@ -76,6 +76,7 @@ describe('using a template', () => {
     expect(made.tree.children[1].targetId).toBe(t.body.target.id);
     expect(made.tree.children[1].id).not.toBe(stageId);
     expect((await c.member.agent.get(`/api/recipes/${made.id}`)).status).toBe(200);
+    expect((await c.member.agent.get(`/api/recipes/${made.id}/revisions`)).body.revisions).toHaveLength(1);
     const detail = (await c.member.agent.get(base())).body.template;
     expect(detail.useCount).toBe(1);
     expect(detail.myUses).toEqual([{ recipeId: made.id, version: 1 }]);
