@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { api, ApiError } from '@/lib/api';
 import { authClient } from '@/lib/auth-client';
-import type { ClubDetail as ApiClubDetail, ClubInvitation, ClubListItem, ClubMember as ApiClubMember, TemplateSummary } from '@/shared/schemas/club-api';
+import type { ClubDetail as ApiClubDetail, ClubInvitation, ClubListItem, ClubMember as ApiClubMember, InvitationPreview, TemplateSummary } from '@/shared/schemas/club-api';
 
 /** Club lists change by our own writes (which invalidate) or another member's; half a minute is fine. */
 export const CLUBS_STALE_MS = 30_000;
@@ -13,7 +13,7 @@ export const CLUB_ROLES: readonly ClubRole[] = ['member', 'admin', 'owner'];
 export type ClubSummary = ClubListItem;
 /** better-auth's member row id is looked up when our club API does not send it. */
 export type ClubMember = ApiClubMember;
-export type { ClubInvitation, TemplateSummary };
+export type { ClubInvitation, InvitationPreview, TemplateSummary };
 export interface ClubDetail extends Omit<ApiClubDetail, 'members'> {
   members: ClubMember[];
 }
@@ -23,6 +23,7 @@ export const clubKeys = {
   list: () => [...clubKeys.all, 'list'] as const,
   detail: (id: string) => [...clubKeys.all, 'detail', id] as const,
   invitation: (id: string) => ['invitations', id] as const,
+  invitationPreview: (id: string) => ['invitations', id, 'preview'] as const,
 };
 
 /** Owners and admins manage invitations and templates. */
@@ -127,6 +128,15 @@ export function useInvitationQuery(id: string, enabled: boolean) {
     queryFn: () => unwrapAuth(authClient.organization.getInvitation({ query: { id } })).then((r) => r as unknown as InvitationView),
     enabled: enabled && id.length > 0,
     retry: false,
+  });
+}
+
+/** What a signed-out visitor may see of an invitation: club, inviter, role, masked address. */
+export function useInvitationPreviewQuery(id: string, enabled: boolean) {
+  return useQuery({
+    queryKey: clubKeys.invitationPreview(id),
+    queryFn: ({ signal }) => api.get<InvitationPreview>(`/api/invitations/${encodeURIComponent(id)}/preview`, signal),
+    enabled: enabled && id.length > 0,
   });
 }
 

@@ -16,6 +16,8 @@ import { clubsRouter } from './routes/clubs';
 import { devMailRouter } from './routes/dev-mail';
 import { healthRouter } from './routes/health';
 import { historyRouter } from './routes/history';
+import { rateLimitPerClient } from './middleware/rate-limit';
+import { invitationPreviewRouter } from './routes/invitation-preview';
 import { calibrationDarksRouter } from './routes/calibration-darks';
 import { calibrationFramesRouter, calibrationIntakeRouter } from './routes/calibration-intake';
 import { calibrationRecipesRouter } from './routes/calibration-recipes';
@@ -80,6 +82,9 @@ export function createApp({ env, db, auth, mailer }: AppDeps): Express {
 
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db));
+  // The e-mailed invitation link is opened signed out: its read-only preview needs no session
+  // (limited per client address like better-auth's own routes, counted in PostgreSQL).
+  app.use('/api/invitations', rateLimitPerClient(db, { prefix: 'invitation-preview', windowS: 60, max: env.AUTH_RATE_LIMIT }), invitationPreviewRouter(db));
 
   app.use('/api/sites', session, sameOrigin, sitesRouter(db));
   app.use('/api/rigs', session, sameOrigin, rigsRouter(db));

@@ -11,3 +11,9 @@ export const ROLE_CHOICES = [
   { value: 'admin', label: 'Admin' },
   { value: 'owner', label: 'Owner' },
 ] as const;
+
+/** "a member", "an admin", "an admin and member": a stored role (or comma list) after "as". */
+export function roleWithArticle(role: string): string {
+  const words = rolesText([role]).toLowerCase().split(', ');
+  return `${/^[aeiou]/.test(words[0] ?? '') ? 'an' : 'a'} ${words.join(' and ')}`;
+}

@@ -66,6 +66,12 @@ export const templateListQuerySchema = z.object({
   retired: z.enum(['0', '1']).optional(),
 });
 
+/**
+ * An invitation id in a link: better-auth's ids (32 letters and digits) or UUIDs. Anything else
+ * is refused before the database is asked.
+ */
+export const invitationIdSchema = z.string().regex(/^[A-Za-z0-9-]{16,64}$/, 'This is not an invitation link');
+
 export const accountSettingsSchema = z.object({ notifyTemplateVersions: z.boolean({ error: 'Choose on or off' }) });
 export type AccountSettings = z.output<typeof accountSettingsSchema>;
 
@@ -94,6 +100,21 @@ export interface ClubInvitation {
   role: string;
   status: string;
   expiresAt: string;
+}
+
+/**
+ * What an e-mailed invitation link shows before anyone signs in (GET /api/invitations/:id/preview):
+ * only a pending, unexpired invitation answers, and only with these fields.
+ */
+export interface InvitationPreview {
+  clubName: string;
+  inviterName: string;
+  /** As stored: one role or a comma list ("admin,member"). */
+  role: string;
+  /** The invited address, masked ("t***@quarryhill.example"). */
+  email: string;
+  expiresAt: string;
+  status: 'pending';
 }
 
 export interface TemplateSummary {

@@ -48,3 +48,27 @@ describe('sign-in rate limit', () => {
     expect(res.status).toBe(429);
   });
 });
+
+describe('public invitation preview rate limit', () => {
+  it('answers 429 with Retry-After past the limit per client address, counted across processes', async () => {
+    const p1 = await startHarness({ AUTH_RATE_LIMIT: '3' });
+    const p2 = await startHarness({ AUTH_RATE_LIMIT: '3' });
+    try {
+      const clientIp = '203.0.113.21'; // documentation range (RFC 5737)
+      const preview = (h: Harness, ip = clientIp) => request(h.app).get('/api/invitations/0123456789abcdef0123456789abcdef/preview').set('X-Forwarded-For', ip);
+      expect((await preview(p1)).status).toBe(404);
+      expect((await preview(p2)).status).toBe(404);
+      expect((await preview(p1)).status).toBe(404);
+      const limited = await preview(p2);
+      expect(limited.status).toBe(429);
+      expect(limited.body.error.code).toBe('too-many-requests');
+      expect(Number(limited.headers['retry-after'])).toBeGreaterThan(0);
+      expect(Number(limited.headers['retry-after'])).toBeLessThanOrEqual(60);
+      // Another address still gets its answer.
+      expect((await preview(p1, '203.0.113.22')).status).toBe(404);
+    } finally {
+      await p1.close();
+      await p2.close();
+    }
+  });
+});

@@ -182,6 +182,14 @@ test('an owner resends and revokes an invitation; the revoked link says so', asy
   await expect(invitee.page.getByTestId('invitation-error')).toContainText('This invitation cannot be opened');
   await expect(invitee.page.getByTestId('invitation-accept')).toHaveCount(0);
   await snap(invitee.page, info, 'clubs-admin-06-revoked');
+  // Signed out, the same link says the club withdrew it and offers no way to accept.
+  const signedOut = await browser.newContext({ viewport: info.project.use.viewport ?? undefined, baseURL: BASE_URL });
+  const visitor = await signedOut.newPage();
+  await visitor.goto(link);
+  await expect(visitor.getByTestId('invitation-error')).toContainText('The club withdrew this invitation.');
+  await expect(visitor.getByTestId('invitation-sign-up')).toHaveCount(0);
+  await snap(visitor, info, 'clubs-admin-06b-revoked-signed-out');
+  await signedOut.close();
   await invitee.page.goto('/clubs');
   await expect(invitee.page.getByTestId('clubs-empty')).toBeVisible();
 });

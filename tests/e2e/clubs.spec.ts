@@ -4,9 +4,10 @@ import { expectSignedIn, makeSiteAdmin, openSection, signUpThroughUi, snap, uniq
 /*
  * Issue 7 "done means": an owner creates a club in the UI, publishes a recipe as a template and
  * invites a new person by e-mail; the invitation is read back from the local SMTP fake on the
- * admin Mail page; the new person opens the link signed out, creates an account from the
- * invitation page, joins, and uses the template on their own rig, whose filters are named
- * differently (one band has no filter of its band at all, so the app asks for it).
+ * admin Mail page; the new person opens the link signed out, sees who invites them to which club,
+ * creates an account from the invitation page, joins, and uses the template on their own rig,
+ * whose filters are named differently (one band has no filter of its band at all, so the app
+ * asks for it).
  */
 
 async function api<T>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
@@ -89,6 +90,12 @@ test('an owner shares a template; an invited newcomer joins by e-mail and uses i
   const context = await browser.newContext({ viewport });
   const newcomer = await context.newPage();
   await newcomer.goto(href);
+  // Before any account exists, the link says who invites them where (the public preview).
+  const preview = newcomer.getByTestId('invitation-preview');
+  await expect(preview).toContainText(`Wren Ostby invites you to ${clubName} as a member.`);
+  await expect(preview).toContainText('Sent to c***@e2e.example');
+  await expect(preview).not.toContainText(newcomerEmail);
+  await snap(newcomer, info, 'clubs-02b-invitation-signed-out');
   await newcomer.getByTestId('invitation-sign-up').click();
   await newcomer.getByLabel('Name', { exact: true }).fill('Ilse Quarrington');
   await newcomer.getByLabel('Email', { exact: true }).fill(newcomerEmail);

@@ -64,8 +64,9 @@ describe('the published JSON Schema', () => {
     const validate = ajv.compile(JSON.parse(planJsonSchemaText()) as object);
     const withFraming = (raDeg: number, positionAngleDeg: number) => {
       const plan = samplePlan();
-      const [first, ...rest] = plan.targets;
-      const framings = first!.framings.map((f, i) => (i === 0 ? { ...f, raDeg, positionAngleDeg } : f));
+      const [first, ...rest] = plan.targets ?? [];
+      const framings = (first!.framings ?? []).map((f, i) => (i === 0 ? { ...f, raDeg, positionAngleDeg } : f));
+      expect(framings.length).toBeGreaterThan(0);
       return { ...plan, targets: [{ ...first!, framings }, ...rest] };
     };
     const cases: [number, number, boolean][] = [
