@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 
 import { historyKeys } from '@/hooks/use-history';
@@ -6,7 +6,7 @@ import { recipeKeys } from '@/hooks/use-recipes';
 import { api, isApiError, withQuery } from '@/lib/api';
 import type { IntakeFile } from '@/lib/fits-intake';
 import { sendBody, type UploadProgress } from '@/lib/upload';
-import type { DarkLibrary, DarkLibrarySet, DarkSetInput, DarkToShoot, FlatsPlan, IntakeResult } from '@/shared/schemas/calibration-api';
+import type { DarkLibrary, DarkLibrarySet, DarkSetInput, DarkToShoot, FlatsPlan, IntakeList, IntakeResult } from '@/shared/schemas/calibration-api';
 
 /** The library changes by our own writes (which invalidate); a minute covers another tab. */
 export const CALIBRATION_STALE_MS = 60_000;
@@ -15,7 +15,11 @@ export const calibrationKeys = {
   all: ['calibration'] as const,
   darkLibrary: () => [...calibrationKeys.all, 'dark-library'] as const,
   flats: (night: string | null) => [...calibrationKeys.all, 'flats', night ?? 'latest'] as const,
+  intakes: () => [...calibrationKeys.all, 'intakes'] as const,
 };
+
+/** Imports per page of the "Imports" list. */
+export const INTAKES_PAGE_SIZE = 20;
 
 const setPath = (id: string) => `/api/calibration/dark-sets/${encodeURIComponent(id)}`;
 
@@ -50,7 +54,18 @@ export function useIntakeMutation() {
   return { ...mutation, progress };
 }
 
-/** Takes back every frame one intake recorded. */
+/** The user's past imports, newest first, a page at a time ("Show older imports"). */
+export function useIntakesQuery() {
+  return useInfiniteQuery({
+    queryKey: calibrationKeys.intakes(),
+    queryFn: ({ pageParam, signal }) => api.get<IntakeList>(withQuery('/api/calibration/intakes', { limit: String(INTAKES_PAGE_SIZE), cursor: pageParam ?? undefined }), signal),
+    initialPageParam: null as string | null,
+    getNextPageParam: (last) => last.nextCursor,
+    staleTime: CALIBRATION_STALE_MS,
+  });
+}
+
+/** Takes back every frame one intake recorded (right after it, or later from the Imports list). */
 export function useUndoIntakeMutation() {
   const invalidate = useInvalidateCalibration();
   return useMutation({

@@ -2,7 +2,8 @@
  * Words and numbers of the calibration screen: frame counts by type, dark-set settings, angles.
  * Pure, so the unit tests read them without a renderer.
  */
-import type { CaptureFrameType, DarkLibrarySet, IntakeResult } from '@/shared/schemas/calibration-api';
+import { formatNightDate } from '@/lib/format';
+import type { CaptureFrameType, DarkLibrarySet, IntakeResult, IntakeSummary } from '@/shared/schemas/calibration-api';
 
 const TYPE_WORDS: Record<CaptureFrameType, [string, string]> = {
   light: ['light', 'lights'],
@@ -24,6 +25,35 @@ export function recordedText(recorded: IntakeResult['recorded']): string | null 
   if (parts.length === 0) return null;
   if (parts.length === 1) return parts[0]!;
   return `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]!}`;
+}
+
+const importedFormat = new Map<string, Intl.DateTimeFormat>();
+
+/** "17 Nov 2026, 21:04" in the viewer's zone (or `timeZone`): when an import was made. */
+export function importedAtText(instant: string, timeZone?: string): string {
+  const key = timeZone ?? '';
+  let f = importedFormat.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+    importedFormat.set(key, f);
+  }
+  return f.format(new Date(instant));
+}
+
+/** "Sat 21 Nov 2026", or "Fri 20 Nov 2026 – Sun 22 Nov 2026" when an import covers several nights. */
+export function nightsText(firstNight: string, lastNight: string): string {
+  const first = formatNightDate(firstNight);
+  return firstNight === lastNight ? first : `${first} – ${formatNightDate(lastNight)}`;
+}
+
+/** "M 31, M 33 and NGC 891", "M 31, M 33, M 42 and 2 more", or null when no light named its object. */
+export function objectsText(s: Pick<IntakeSummary, 'objects' | 'objectCount'>): string | null {
+  const names = s.objects;
+  if (names.length === 0) return null;
+  const more = s.objectCount - names.length;
+  if (more > 0) return `${names.join(', ')} and ${more} more`;
+  if (names.length === 1) return names[0]!;
+  return `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]!}`;
 }
 
 /** "Reading headers 120 / 400". */

@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { DarkLibrarySection } from '@/components/calibration/dark-library-section';
 import { FlatsSection } from '@/components/calibration/flats-section';
+import { ImportsSection } from '@/components/calibration/imports-section';
 import { IntakeSection } from '@/components/calibration/intake-section';
 import { useIntake } from '@/components/calibration/use-intake';
 import { HistoryList } from '@/components/history/history-list';
@@ -19,8 +20,9 @@ const PARTS: readonly Part[] = ['frames', 'darks', 'flats', 'history'];
 let rememberedPart: Part = 'frames';
 
 /**
- * Calibration: add a night's frames (headers only), the dark library, flats for a night's lights
- * and the capture history. Phones switch between the parts; from 900 px they sit in two columns.
+ * Calibration: add a night's frames (headers only) and see past imports, the dark library, flats
+ * for a night's lights and the capture history. Phones switch between the parts; from 900 px
+ * they sit in two columns.
  */
 export function CalibrationScreen() {
   const { isWide } = useBreakpoints();
@@ -43,6 +45,7 @@ export function CalibrationScreen() {
         <View style={styles.columns}>
           <View style={styles.column}>
             <IntakeSection flow={flow} />
+            <ImportsSection />
             <HistoryList />
           </View>
           <View style={styles.column}>
@@ -66,7 +69,12 @@ export function CalibrationScreen() {
           { key: 'history', label: 'History', testID: 'calibration-tab-history' },
         ]}
       />
-      {part === 'frames' ? <IntakeSection flow={flow} /> : null}
+      {part === 'frames' ? (
+        <>
+          <IntakeSection flow={flow} />
+          <ImportsSection />
+        </>
+      ) : null}
       {part === 'darks' ? <DarkLibrarySection /> : null}
       {part === 'flats' ? <FlatsSection /> : null}
       {part === 'history' ? <HistoryList /> : null}

@@ -6,6 +6,7 @@ import { AppText } from '@/components/ui/app-text';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { useThemedStyles } from '@/hooks/use-themed-styles';
+import { isApiError } from '@/lib/api';
 import { cleanError } from '@/lib/clean-error';
 import { radii, spacing, type Palette } from '@/constants/theme';
 import type { IntakeResult as Result } from '@/shared/schemas/calibration-api';
@@ -43,7 +44,8 @@ export function IntakeResultPanel({ flow, result }: { flow: IntakeFlow; result: 
     result.duplicates > 0 ? `${countText(result.duplicates, 'frame was', 'frames were')} already on record and left as they were.` : null,
     flow.skipped > 0 ? `${countText(flow.skipped, 'other file', 'other files')} in the folder skipped (not .fits, .fit or .fts).` : null,
   ].filter((n): n is string => n !== null);
-  const undone = flow.undo.isSuccess;
+  // 404: the import was already removed (e.g. from the Imports list): that is undone too.
+  const undone = flow.undo.isSuccess || isApiError(flow.undo.error, 404);
   const title = undone ? 'Import undone' : recorded ? `Recorded ${recorded}` : 'Nothing new recorded';
   const message = undone ? 'Nothing from this import is on record any more.' : notes.join(' ') || undefined;
   return (
@@ -54,7 +56,7 @@ export function IntakeResultPanel({ flow, result }: { flow: IntakeFlow; result: 
         ) : null}
         <Button label="Add more frames" size="small" variant="ghost" onPress={flow.restart} testID="intake-again" />
       </Banner>
-      {flow.undo.isError ? <Banner tone="danger" title="Could not undo the import" message={cleanError(flow.undo.error)} testID="intake-undo-error" /> : null}
+      {flow.undo.isError && !undone ? <Banner tone="danger" title="Could not undo the import" message={cleanError(flow.undo.error)} testID="intake-undo-error" /> : null}
       {undone ? null : <RejectedList rejected={rejected} />}
     </View>
   );

@@ -51,6 +51,25 @@ export const intakeResultSchema = z.object({
 });
 export type IntakeResult = z.infer<typeof intakeResultSchema>;
 
+/** One past import in GET /api/calibration/intakes: what it recorded (still on record), by type. */
+export const intakeSummarySchema = z.object({
+  intakeId: z.string(),
+  /** When it was imported: the earliest record time of its frames (ISO, UTC). */
+  importedAt: z.string(),
+  frames: z.object({ light: z.number().int(), dark: z.number().int(), flat: z.number().int(), bias: z.number().int() }),
+  /** The nights its frames belong to, first and last (YYYY-MM-DD). */
+  firstNight: nightDateSchema,
+  lastNight: nightDateSchema,
+  /** Up to three OBJECT names of its lights, by name; `objectCount` counts them all. */
+  objects: z.array(z.string()),
+  objectCount: z.number().int(),
+});
+export type IntakeSummary = z.infer<typeof intakeSummarySchema>;
+
+/** Answer of GET /api/calibration/intakes?limit&cursor: newest first; `nextCursor` asks for the next page. */
+export const intakeListSchema = z.object({ intakes: z.array(intakeSummarySchema), nextCursor: z.string().nullable() });
+export type IntakeList = z.infer<typeof intakeListSchema>;
+
 /** Body of POST /api/calibration/dark-sets (and PUT with `version`): a set entered by hand. */
 export const darkSetInputSchema = z.object({
   exposureS: z.number({ error: 'Exposure must be a number' }).positive('Exposure must be above 0 s').max(3600, 'Exposure is at most 3600 s'),

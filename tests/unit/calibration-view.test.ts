@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cameraSettingsText, celsiusText, degreesText, readingText, recordedText, sortDarkSets, validityChoices } from '@/components/calibration/calibration-format';
+import { cameraSettingsText, celsiusText, degreesText, importedAtText, nightsText, objectsText, readingText, recordedText, sortDarkSets, validityChoices } from '@/components/calibration/calibration-format';
 import { darkStatus, darksToShoot } from '@/components/dry-run/darks-rows';
 import { byFilterText, cumulativeSeries, flippedAngle, hoursAxis, integrationText } from '@/components/history/history-format';
 import type { DarksNeeded } from '@/shared/dry-run/types';
@@ -12,6 +12,16 @@ describe('calibration words', () => {
     expect(recordedText({ light: 1, dark: 0, flat: 0, bias: 2 })).toBe('1 light and 2 bias frames');
     expect(recordedText({ light: 0, dark: 0, flat: 0, bias: 0 })).toBeNull();
     expect(readingText(120, 400)).toBe('Reading headers 120 / 400');
+  });
+
+  it('describes a past import: when, its nights and up to three objects', () => {
+    expect(importedAtText('2026-11-17T20:04:30Z', 'Europe/Zurich')).toBe('17 Nov 2026, 21:04');
+    expect(nightsText('2026-10-08', '2026-10-08')).toBe('Thu 8 Oct 2026');
+    expect(nightsText('2026-10-08', '2026-10-09')).toBe('Thu 8 Oct 2026 – Fri 9 Oct 2026');
+    expect(objectsText({ objects: [], objectCount: 0 })).toBeNull();
+    expect(objectsText({ objects: ['M 31'], objectCount: 1 })).toBe('M 31');
+    expect(objectsText({ objects: ['M 31', 'M 33', 'NGC 891'], objectCount: 3 })).toBe('M 31, M 33 and NGC 891');
+    expect(objectsText({ objects: ['IC 1396', 'M 31', 'M 33'], objectCount: 5 })).toBe('IC 1396, M 31, M 33 and 2 more');
   });
 
   it('writes angles with one decimal in 0…360 and temperatures with a true minus', () => {
