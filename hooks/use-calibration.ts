@@ -6,7 +6,7 @@ import { recipeKeys } from '@/hooks/use-recipes';
 import { api, isApiError, withQuery } from '@/lib/api';
 import type { IntakeFile } from '@/lib/fits-intake';
 import { sendBody, type UploadProgress } from '@/lib/upload';
-import type { DarkLibrary, DarkLibrarySet, DarkSetInput, DarkToShoot, FlatsPlan, IntakeList, IntakeResult } from '@/shared/schemas/calibration-api';
+import type { BiasLibrarySet, DarkLibrary, DarkLibrarySet, DarkSetInput, DarkToShoot, FlatsPlan, IntakeList, IntakeResult } from '@/shared/schemas/calibration-api';
 
 /** The library changes by our own writes (which invalidate); a minute covers another tab. */
 export const CALIBRATION_STALE_MS = 60_000;
@@ -101,6 +101,15 @@ export function useDeleteDarkSetMutation() {
       set.source === 'intake'
         ? api.del(`/api/calibration/dark-library/intake/${encodeURIComponent(set.id.replace(/^intake:/, ''))}`)
         : api.del(setPath(set.id)),
+    onSettled: invalidate,
+  });
+}
+
+/** Forgets the recorded bias frames behind a bias set (id `bias:<key>`). */
+export function useDeleteBiasSetMutation() {
+  const invalidate = useInvalidateCalibration();
+  return useMutation({
+    mutationFn: (set: Pick<BiasLibrarySet, 'id'>) => api.del(`/api/calibration/dark-library/bias/${encodeURIComponent(set.id.replace(/^bias:/, ''))}`),
     onSettled: invalidate,
   });
 }

@@ -2,9 +2,10 @@ import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type { Database } from '@/db/client';
 import { captureFrame, darkSet, framing, rig, target, userSettings } from '@/db/schema';
 import { HttpError } from '@/server/errors';
+import { groupBiasFrames } from '@/shared/calibration/bias';
 import { darkLibraryForDryRun, groupDarkFrames, isDarkSetStale } from '@/shared/calibration/darks';
 import type { StoredFrame } from '@/shared/calibration/types';
-import type { DarkLibrary, DarkLibrarySet } from '@/shared/schemas/calibration-api';
+import type { BiasLibrarySet, DarkLibrary, DarkLibrarySet } from '@/shared/schemas/calibration-api';
 import type { DryRunInput, DryRunTarget } from '@/shared/dry-run';
 import { targetIds } from '@/shared/recipe/summary';
 import type { RecipeTree } from '@/shared/recipe/types';
@@ -107,11 +108,24 @@ export function handDarkSet(row: DarkSetRow, validity: { validityMonths: number;
   };
 }
 
-/** The user's dark library: sets entered by hand, then sets grouped from recorded dark frames (newest first). */
+/**
+ * The user's dark library: sets entered by hand, then sets grouped from recorded dark frames
+ * (newest first); and bias sets grouped from recorded bias frames, stale by the same validity.
+ */
 export async function loadDarkLibrary(db: Database, ownerId: string): Promise<DarkLibrary> {
   const validity = await darkValidity(db, ownerId);
   const hand = await db.select().from(darkSet).where(eq(darkSet.ownerId, ownerId)).orderBy(desc(darkSet.takenOn), asc(darkSet.createdAt));
-  const frames = await db.select().from(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), eq(captureFrame.frameType, 'dark')));
-  const grouped = frames.length ? groupDarkFrames(frames.map(toStoredFrame), validity.validityMonths, validity.today) : [];
-  return { validityMonths: validity.validityMonths, sets: [...hand.map((row) => handDarkSet(row, validity)), ...grouped] };
+  const rows = await db.select().from(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), inArray(captureFrame.frameType, ['dark', 'bias'])));
+  const frames = rows.map(toStoredFrame);
+  const grouped = frames.length ? groupDarkFrames(frames, validity.validityMonths, validity.today) : [];
+  const biasSets = frames.length ? groupBiasFrames(frames, validity.validityMonths, validity.today) : [];
+  return { validityMonths: validity.validityMonths, sets: [...hand.map((row) => handDarkSet(row, validity)), ...grouped], biasSets };
+}
+
+/** The user's bias sets (grouped from recorded bias frames) with their staleness today. */
+export async function loadBiasSets(db: Database, ownerId: string): Promise<BiasLibrarySet[]> {
+  const rows = await db.select().from(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), eq(captureFrame.frameType, 'bias')));
+  if (rows.length === 0) return [];
+  const validity = await darkValidity(db, ownerId);
+  return groupBiasFrames(rows.map(toStoredFrame), validity.validityMonths, validity.today);
 }

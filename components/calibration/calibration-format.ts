@@ -3,7 +3,7 @@
  * Pure, so the unit tests read them without a renderer.
  */
 import { formatNightDate } from '@/lib/format';
-import type { CaptureFrameType, DarkLibrarySet, IntakeResult, IntakeSummary } from '@/shared/schemas/calibration-api';
+import type { BiasLibrarySet, CaptureFrameType, DarkLibrarySet, IntakeResult, IntakeSummary } from '@/shared/schemas/calibration-api';
 
 const TYPE_WORDS: Record<CaptureFrameType, [string, string]> = {
   light: ['light', 'lights'],
@@ -89,6 +89,12 @@ export function cameraSettingsText(s: { gain: number | null; offset: number | nu
 /** "300 s at −10 °C": what a dark set is first known by. */
 export function darkSetHeadline(s: Pick<DarkLibrarySet, 'exposureS' | 'temperatureC'>): string {
   return `${secondsText(s.exposureS)} at ${celsiusText(s.temperatureC)}`;
+}
+
+/** "Bias · gain 100 · offset 50 · bin 1 · −10 °C · 50 frames · Sat 14 Mar 2026": one bias set in a line. */
+export function biasSetText(s: BiasLibrarySet): string {
+  const temperature = s.temperatureC === null ? 'no temperature recorded' : celsiusText(s.temperatureC);
+  return ['Bias', cameraSettingsText(s), temperature, countText(s.frames, 'frame', 'frames'), formatNightDate(s.takenOn)].join(' · ');
 }
 
 /** Library order: by temperature, then exposure, then the camera settings, newest first. */

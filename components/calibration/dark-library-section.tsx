@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { countText, localDateYmd, sortDarkSets, validityChoices } from '@/components/calibration/calibration-format';
 import { DarkSetForm, darkSetValues } from '@/components/calibration/dark-set-form';
+import { BiasSetRow } from '@/components/calibration/bias-set-row';
 import { DarkSetRow } from '@/components/calibration/dark-set-row';
 import { AppText } from '@/components/ui/app-text';
 import { Banner } from '@/components/ui/banner';
@@ -52,7 +53,7 @@ function AddSet({ onDone }: { onDone: () => void }) {
   );
 }
 
-/** The dark library: sets recorded from dark frames and sets typed in by hand, with their age against the validity. */
+/** The dark library: sets recorded from dark frames and sets typed in by hand, then bias sets recorded from bias frames, with their age against the validity. */
 export function DarkLibrarySection() {
   const library = useDarkLibraryQuery();
   const [adding, setAdding] = useState(false);
@@ -79,6 +80,21 @@ export function DarkLibrarySection() {
               ))}
             </View>
           )}
+          {library.data.biasSets.length > 0 ? (
+            <View style={styles.list} testID="bias-library">
+              <AppText weight="semibold" role="heading" aria-level={3}>
+                Bias
+              </AppText>
+              <AppText variant="small" tone="faint">
+                Bias frames calibrate flats at the same gain, offset and binning; they go stale with the darks.
+              </AppText>
+              <View style={styles.list} role="list" testID="bias-library-list">
+                {library.data.biasSets.map((set) => (
+                  <BiasSetRow key={set.id} set={set} />
+                ))}
+              </View>
+            </View>
+          ) : null}
           <ValiditySetting months={library.data.validityMonths} />
         </>
       ) : null}

@@ -16,10 +16,11 @@ import type { DarkLibrarySet } from '@/shared/schemas/calibration-api';
 
 type Mode = 'view' | 'edit' | 'confirm-delete';
 
-function StaleBadge() {
+/** The "Stale" mark of a set older than the validity. */
+export function StaleBadge({ testID = 'dark-set-stale' }: { testID?: string }) {
   const styles = useThemedStyles(makeStyles);
   return (
-    <View style={styles.badge} testID="dark-set-stale">
+    <View style={styles.badge} testID={testID}>
       <AppText variant="caption" weight="semibold" tone="danger">
         Stale
       </AppText>
@@ -119,7 +120,8 @@ export function DarkSetRow({ set, today }: { set: DarkLibrarySet; today: string 
   );
 }
 
-const makeStyles = (c: Palette) =>
+/** Row styles shared with the bias rows (`bias-set-row.tsx`). */
+export const makeStyles = (c: Palette) =>
   StyleSheet.create({
     row: { borderWidth: 1, borderColor: c.border, borderRadius: radii.md, padding: spacing.md, gap: spacing.xs, backgroundColor: c.surface },
     rowStale: { borderLeftWidth: 3, borderLeftColor: c.danger },

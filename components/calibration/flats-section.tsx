@@ -25,6 +25,8 @@ const SOURCES = [
   { value: 'sky' as const, label: 'Twilight sky' },
 ];
 
+const BIAS_CAUTION = 'Flats need bias frames (or darks at the flats’ exposure) at the same gain, offset and binning to calibrate them.';
+
 function ComboRow({ combo }: { combo: FlatCombo }) {
   const styles = useThemedStyles(makeStyles);
   const has = combo.flatFrames > 0;
@@ -41,6 +43,9 @@ function ComboRow({ combo }: { combo: FlatCombo }) {
         </AppText>
         <AppText variant="small" weight="semibold" tone={has ? 'ok' : 'danger'} testID="flats-combo-status">
           {has ? `${countText(combo.flatFrames, 'flat', 'flats')} on record` : 'No flats on record'}
+        </AppText>
+        <AppText variant="small" tone={combo.biasOnRecord ? 'ok' : 'muted'} testID="flats-combo-bias">
+          {combo.biasOnRecord ? 'bias on record' : 'no bias on record'}
         </AppText>
       </View>
       <AppText variant="small" tone="muted" tabular>
@@ -92,8 +97,8 @@ export function FlatsSection() {
           ) : null}
           <AppText variant="small" tone="faint" testID="flats-caution">
             {source === 'sky'
-              ? 'Shoot flats before anything in the optical train moves: same camera angle, focus and filters. Sky flats need the twilight window; the dry run checks the recipe fits in it.'
-              : 'Shoot flats before anything in the optical train moves: same camera angle, focus and filters, with the panel evenly lit over the aperture.'}
+              ? `Shoot flats before anything in the optical train moves: same camera angle, focus and filters. Sky flats need the twilight window; the dry run checks the recipe fits in it. ${BIAS_CAUTION}`
+              : `Shoot flats before anything in the optical train moves: same camera angle, focus and filters, with the panel evenly lit over the aperture. ${BIAS_CAUTION}`}
           </AppText>
           {make.isError ? <Banner tone="danger" title="Could not make the recipe" message={cleanError(make.error)} /> : null}
           <View style={styles.actions}>

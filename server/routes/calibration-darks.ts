@@ -5,6 +5,7 @@ import type { Database } from '@/db/client';
 import { captureFrame, darkSet, userSettings } from '@/db/schema';
 import { notFound } from '@/server/errors';
 import { DEFAULT_DARK_VALIDITY_MONTHS, darkValidity, handDarkSet, loadDarkLibrary, toStoredFrame } from '@/server/dry-run-input';
+import { groupBiasFrames } from '@/shared/calibration/bias';
 import { groupDarkFrames } from '@/shared/calibration/darks';
 import { calibrationSettingsSchema, darkSetInputSchema } from '@/shared/schemas/calibration-api';
 import { parseBody, parseId } from './validate';
@@ -13,11 +14,13 @@ import { updateVersioned } from './versioned';
 type FrameRow = typeof captureFrame.$inferSelect;
 type DarkSetRow = typeof darkSet.$inferSelect;
 
-/** Which library set (`intake:<key>`) each recorded dark frame falls in: frame ids by set id. */
-function framesBySet(rows: FrameRow[], validity: { validityMonths: number; today: string }): Map<string, string[]> {
+type Grouping = typeof groupDarkFrames | typeof groupBiasFrames;
+
+/** Which library set (`intake:<key>` or `bias:<key>`, by `group`) each recorded frame falls in: frame ids by set id. */
+function framesBySet(rows: FrameRow[], validity: { validityMonths: number; today: string }, group: Grouping): Map<string, string[]> {
   const out = new Map<string, string[]>();
   for (const row of rows) {
-    const [set] = groupDarkFrames([toStoredFrame(row)], validity.validityMonths, validity.today);
+    const [set] = group([toStoredFrame(row)], validity.validityMonths, validity.today);
     if (!set) continue;
     const ids = out.get(set.id) ?? [];
     ids.push(row.id);
@@ -28,7 +31,7 @@ function framesBySet(rows: FrameRow[], validity: { validityMonths: number; today
 
 const darkSetUpdateSchema = darkSetInputSchema.extend({ version: z.number({ error: 'Send the version you last saw' }).int().positive() });
 
-/** /api/calibration: the dark library (hand sets and sets grouped from recorded darks) and its validity setting. */
+/** /api/calibration: the dark library (hand sets, sets grouped from recorded darks, bias sets) and its validity setting. */
 export function calibrationDarksRouter(db: Database): Router {
   const r = Router();
 
@@ -59,15 +62,23 @@ export function calibrationDarksRouter(db: Database): Router {
     res.status(204).end();
   });
 
+  /** Deletes the user's recorded frames of one grouped set; 404 when none of theirs falls in it. */
+  async function deleteGroupedSet(ownerId: string, frameType: 'dark' | 'bias', id: string, group: Grouping): Promise<number> {
+    const rows = await db.select().from(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), eq(captureFrame.frameType, frameType)));
+    const ids = framesBySet(rows, await darkValidity(db, ownerId), group).get(id) ?? [];
+    if (ids.length === 0) throw notFound(frameType === 'dark' ? 'No such dark set' : 'No such bias set');
+    const gone = await db.delete(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), inArray(captureFrame.id, ids))).returning({ id: captureFrame.id });
+    return gone.length;
+  }
+
   // A set grouped from recorded dark frames: its frames go.
   r.delete('/dark-library/intake/:key', async (req, res) => {
-    const ownerId = res.locals.user.id;
-    const id = `intake:${req.params.key}`;
-    const rows = await db.select().from(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), eq(captureFrame.frameType, 'dark')));
-    const ids = framesBySet(rows, await darkValidity(db, ownerId)).get(id) ?? [];
-    if (ids.length === 0) throw notFound('No such dark set');
-    const gone = await db.delete(captureFrame).where(and(eq(captureFrame.ownerId, ownerId), inArray(captureFrame.id, ids))).returning({ id: captureFrame.id });
-    res.json({ deleted: gone.length });
+    res.json({ deleted: await deleteGroupedSet(res.locals.user.id, 'dark', `intake:${req.params.key}`, groupDarkFrames) });
+  });
+
+  // A bias set (id `bias:<key>`): its recorded bias frames go.
+  r.delete('/dark-library/bias/:key', async (req, res) => {
+    res.json({ deleted: await deleteGroupedSet(res.locals.user.id, 'bias', `bias:${req.params.key}`, groupBiasFrames) });
   });
 
   r.get('/settings', async (_req, res) => {

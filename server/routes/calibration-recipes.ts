@@ -4,7 +4,7 @@ import { z } from 'zod';
 import type { Database } from '@/db/client';
 import { captureFrame } from '@/db/schema';
 import { HttpError } from '@/server/errors';
-import { toStoredFrame } from '@/server/dry-run-input';
+import { loadBiasSets, toStoredFrame } from '@/server/dry-run-input';
 import { darksRecipeTree } from '@/shared/calibration/darks';
 import { FLAT_VALID_DAYS_AFTER, flatCombos, flatsRecipeTree } from '@/shared/calibration/flats';
 import { darksRecipeRequestSchema, flatsRecipeRequestSchema } from '@/shared/schemas/calibration-api';
@@ -13,7 +13,7 @@ import { addDaysYmd } from '@/shared/time';
 import { checkLinks, createRecipe } from './recipes';
 import { parseBody, parseQuery } from './validate';
 
-/** The night's (filter, rotator, focus) combinations with the flats on record for each; [] without lights. */
+/** The night's (filter, rotator, focus) combinations with the flats and whether fresh bias is on record for each; [] without lights. */
 async function combosOfNight(db: Database, ownerId: string, nightDate: string) {
   const lights = await db
     .select()
@@ -26,7 +26,7 @@ async function combosOfNight(db: Database, ownerId: string, nightDate: string) {
     .select()
     .from(captureFrame)
     .where(and(eq(captureFrame.ownerId, ownerId), eq(captureFrame.frameType, 'flat'), gte(captureFrame.nightDate, nightDate), lte(captureFrame.nightDate, addDaysYmd(nightDate, FLAT_VALID_DAYS_AFTER + 1))));
-  return flatCombos(lights.map(toStoredFrame), flats.map(toStoredFrame), nightDate);
+  return flatCombos(lights.map(toStoredFrame), flats.map(toStoredFrame), nightDate, await loadBiasSets(db, ownerId));
 }
 
 /** /api/calibration: calibration recipes (darks for a cloudy night, flats matching a night's lights) and the flats a night needs. */

@@ -6,6 +6,8 @@ import { recipeTreeSchema } from '@/shared/recipe/schema';
 import { filterRefSchema } from '@/shared/recipe/steps';
 import type { RecipeNode, RecipeTree } from '@/shared/recipe/types';
 import { angleDiffDeg, wrap360 } from '@/shared/calibration/sky-geometry';
+import { biasServes } from '@/shared/calibration/bias';
+import type { BiasLibrarySet } from '@/shared/schemas/calibration-api';
 
 /*
  * Flats are valid while optical train, focus, filter and rotator angle are unchanged
@@ -50,20 +52,27 @@ function compareNullable<T extends string | number>(a: T | null, b: T | null): n
 
 /**
  * The night's distinct (filter, rotator angle to 0.1°, focus position) among its lights, with
- * the flats on record for each (`flatServes`). Sorted by filter, rotator angle, focus; nulls last.
+ * the flats on record for each (`flatServes`) and whether fresh bias on record matches the
+ * gain, offset and binning of each of its lights (`biasServes`: flats are taken at the lights'
+ * settings and calibrated with bias at the same ones). Sorted by filter, rotator angle, focus; nulls last.
  */
-export function flatCombos(lights: readonly StoredFrame[], flats: readonly StoredFrame[], nightDate: string): FlatCombo[] {
-  const combos = new Map<string, FlatCombo>();
+export function flatCombos(lights: readonly StoredFrame[], flats: readonly StoredFrame[], nightDate: string, biasSets: readonly BiasLibrarySet[] = []): FlatCombo[] {
+  const combos = new Map<string, { combo: FlatCombo; lights: StoredFrame[] }>();
   for (const l of lights) {
     if (l.frameType !== 'light' || l.nightDate !== nightDate) continue;
     const rotatorAngleDeg = l.rotatorAngleDeg === null ? null : roundRotatorDeg(l.rotatorAngleDeg);
     const key = JSON.stringify([l.filter, rotatorAngleDeg, l.focuserPositionSteps]);
     const found = combos.get(key);
-    if (found) found.lightFrames += 1;
-    else combos.set(key, { filter: l.filter, rotatorAngleDeg, focuserPositionSteps: l.focuserPositionSteps, lightFrames: 1, flatFrames: 0 });
+    if (found) {
+      found.combo.lightFrames += 1;
+      found.lights.push(l);
+    } else combos.set(key, { combo: { filter: l.filter, rotatorAngleDeg, focuserPositionSteps: l.focuserPositionSteps, lightFrames: 1, flatFrames: 0, biasOnRecord: false }, lights: [l] });
   }
-  const out = [...combos.values()];
-  for (const combo of out) combo.flatFrames = flats.filter((f) => f.frameType === 'flat' && flatServes(f, combo, nightDate)).length;
+  const out = [...combos.values()].map(({ combo, lights: its }) => ({
+    ...combo,
+    flatFrames: flats.filter((f) => f.frameType === 'flat' && flatServes(f, combo, nightDate)).length,
+    biasOnRecord: its.every((l) => biasServes(biasSets, l)),
+  }));
   return out.sort((a, b) => compareNullable(a.filter, b.filter) || compareNullable(a.rotatorAngleDeg, b.rotatorAngleDeg) || compareNullable(a.focuserPositionSteps, b.focuserPositionSteps));
 }
 

@@ -104,8 +104,27 @@ export const darkLibrarySetSchema = z.object({
 });
 export type DarkLibrarySet = z.infer<typeof darkLibrarySetSchema>;
 
+/** One bias set grouped from recorded bias frames (they calibrate flats at the same gain, offset and binning). */
+export const biasLibrarySetSchema = z.object({
+  /** `bias:<key>`; removed through DELETE /api/calibration/dark-library/bias/:key. */
+  id: z.string(),
+  source: z.literal('intake'),
+  gain: z.number().nullable(),
+  offset: z.number().nullable(),
+  binning: z.number().int(),
+  readoutMode: z.string().nullable(),
+  /** Rounded to 1 °C; null when the frames recorded no temperature. */
+  temperatureC: z.number().nullable(),
+  frames: z.number().int(),
+  /** YYYY-MM-DD: the night of its frames. */
+  takenOn: z.string(),
+  /** Older than the dark validity. */
+  stale: z.boolean(),
+});
+export type BiasLibrarySet = z.infer<typeof biasLibrarySetSchema>;
+
 /** Answer of GET /api/calibration/dark-library. */
-export const darkLibrarySchema = z.object({ validityMonths: z.number().int(), sets: z.array(darkLibrarySetSchema) });
+export const darkLibrarySchema = z.object({ validityMonths: z.number().int(), sets: z.array(darkLibrarySetSchema), biasSets: z.array(biasLibrarySetSchema) });
 export type DarkLibrary = z.infer<typeof darkLibrarySchema>;
 
 /** Body of PUT /api/calibration/settings. */
@@ -140,6 +159,8 @@ export const flatComboSchema = z.object({
   lightFrames: z.number().int(),
   /** Flat frames on record with the same filter, rotator angle (±0.5°) and focus (±1 step) taken from that night to 3 days later. */
   flatFrames: z.number().int(),
+  /** True when a fresh bias set matches the gain, offset and binning of every light of the combination (flats are taken at the lights' settings). */
+  biasOnRecord: z.boolean(),
 });
 export type FlatCombo = z.infer<typeof flatComboSchema>;
 

@@ -65,6 +65,7 @@ describe('calibration API: sessions and ownership', () => {
     ['put', `/api/calibration/dark-sets/${id}`],
     ['delete', `/api/calibration/dark-sets/${id}`],
     ['delete', '/api/calibration/dark-library/intake/2026-10-12%7C120s'],
+    ['delete', '/api/calibration/dark-library/bias/2026-10-12%7Cg0'],
     ['get', '/api/calibration/settings'],
     ['put', '/api/calibration/settings'],
     ['post', '/api/calibration/darks-recipe'],
@@ -425,11 +426,11 @@ describe('flats from the lights of a night', () => {
     const latest = flatsPlanSchema.parse((await u.agent.get('/api/calibration/flats')).body);
     expect(latest.nights).toEqual(['2026-10-14', '2026-10-12']);
     expect(latest.nightDate).toBe('2026-10-14');
-    expect(latest.combos).toEqual([{ filter: 'Ha', rotatorAngleDeg: 12.5, focuserPositionSteps: 15180, lightFrames: 1, flatFrames: 0 }]);
+    expect(latest.combos).toEqual([{ filter: 'Ha', rotatorAngleDeg: 12.5, focuserPositionSteps: 15180, lightFrames: 1, flatFrames: 0, biasOnRecord: false }]);
     const night = flatsPlanSchema.parse((await u.agent.get('/api/calibration/flats?night=2026-10-12')).body);
     expect(night.combos).toEqual([
-      { filter: 'L', rotatorAngleDeg: 12.5, focuserPositionSteps: 15200, lightFrames: 2, flatFrames: 3 },
-      { filter: 'R', rotatorAngleDeg: 12.5, focuserPositionSteps: 15230, lightFrames: 1, flatFrames: 0 },
+      { filter: 'L', rotatorAngleDeg: 12.5, focuserPositionSteps: 15200, lightFrames: 2, flatFrames: 3, biasOnRecord: false },
+      { filter: 'R', rotatorAngleDeg: 12.5, focuserPositionSteps: 15230, lightFrames: 1, flatFrames: 0, biasOnRecord: false },
     ]);
     const bad = await u.agent.get('/api/calibration/flats?night=12.10.2026');
     expect(bad.status).toBe(400);

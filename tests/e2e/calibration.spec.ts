@@ -62,7 +62,7 @@ const dark = (dateObs: string, exposureS: number): CameraFrameSpec => ({ type: '
 /**
  * A night's folder on disk: 10 lights (Ha and OIII, nights of 20 and 22 Nov 2026; two OIII
  * frames after a flip at PA 305°), three 120 s darks, two 60 s darks from January 2025 (stale
- * with any validity up to a year), three Ha flats, a truncated frame and a text file.
+ * with any validity up to a year), two bias frames, three Ha flats, a truncated frame and a text file.
  */
 function writeFolder(): { dir: string; extra: string; brokenName: string } {
   const root = fs.mkdtempSync(path.join(os.tmpdir(), 'nightloom-frames-'));
@@ -77,6 +77,7 @@ function writeFolder(): { dir: string; extra: string; brokenName: string } {
   ['19:20', '19:26', '19:32'].forEach((t, i) => write(`lights/M31_OIII_1122_${i + 1}.fts`, light(`2026-11-22T${t}:00`, 'OIII', 125)));
   [1, 2, 3].forEach((i) => write(`calibration/dark_120s_${i}.fits`, dark(`2026-11-23T10:0${i}:00`, 120)));
   [1, 2].forEach((i) => write(`calibration/dark_60s_${i}.fits`, dark(`2025-01-10T10:0${i}:00`, 60)));
+  [1, 2].forEach((i) => write(`calibration/bias_${i}.fits`, { type: 'Bias Frame', dateObs: `2026-11-23T10:1${i}:00`, exposureS: 0.001, gain: 100, offset: 50, binning: 1, setTempC: -10, sensorTempC: -10 }));
   [1, 2, 3].forEach((i) =>
     write(`calibration/flat_Ha_${i}.fits`, { type: 'Flat Field', dateObs: `2026-11-21T06:1${i}:00`, exposureS: 2, filter: 'Ha', gain: 100, offset: 50, binning: 1, setTempC: -10, focuserPositionSteps: 15200, rotatorAngleDeg: 35 }),
   );
@@ -121,9 +122,9 @@ test('frames from a folder fill the dark library, flats and history; continuing 
   });
   await page.getByTestId('intake-folder-input').setInputFiles(dir);
   await expect(page.getByTestId('intake-progress')).toBeVisible();
-  await expect(page.getByTestId('intake-progress-text')).toHaveText(/^(Reading headers \d+ \/ 19|Sending the headers(…|: .+ of .+)|Sent\. Recording the frames…)$/);
+  await expect(page.getByTestId('intake-progress-text')).toHaveText(/^(Reading headers \d+ \/ 21|Sending the headers(…|: .+ of .+)|Sent\. Recording the frames…)$/);
   await snap(page, info, 'calibration-01-progress');
-  await expect(page.getByTestId('intake-recorded')).toContainText('Recorded 10 lights, 5 darks and 3 flats');
+  await expect(page.getByTestId('intake-recorded')).toContainText('Recorded 10 lights, 5 darks, 3 flats and 2 bias frames');
   await expect(page.getByTestId('intake-recorded')).toContainText('1 other file in the folder skipped');
   const rejected = page.getByTestId('intake-rejected-item');
   await expect(rejected).toHaveCount(1);
@@ -146,6 +147,9 @@ test('frames from a folder fill the dark library, flats and history; continuing 
   await expect(library.getByRole('listitem')).toHaveCount(2);
   await expect(library).toContainText('120 s at −10 °C');
   await expect(page.getByTestId('dark-set-stale')).toHaveCount(1);
+  // The two bias frames: one bias set under the dark sets.
+  await expect(page.getByTestId('bias-library-list').getByRole('listitem')).toHaveCount(1);
+  await expect(page.getByTestId('bias-set-text')).toHaveText('Bias · gain 100 · offset 50 · bin 1 · −10 °C · 2 frames · Sun 22 Nov 2026');
   // A set by hand: the form checks it with the shared schema.
   await page.getByTestId('dark-set-add-open').click();
   await page.getByTestId('dark-set-add-exposureS').fill('600');
@@ -189,6 +193,7 @@ test('frames from a folder fill the dark library, flats and history; continuing 
   await expect(combos.filter({ hasText: 'Ha' })).toContainText('3 flats on record');
   await expect(combos.filter({ hasText: 'OIII' })).toContainText('No flats on record');
   await expect(combos.first()).toContainText('rotator 35.0°');
+  await expect(combos.getByTestId('flats-combo-bias').first()).toHaveText('bias on record');
   await page.getByTestId('flats-source-sky').click();
   await expect(page.getByTestId('flats-caution')).toContainText('twilight');
   await page.getByTestId('flats-section').scrollIntoViewIfNeeded();

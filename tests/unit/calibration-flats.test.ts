@@ -45,24 +45,24 @@ describe('flatCombos: the night’s (filter, rotator angle, focus) and the flats
 
   it('groups the night’s lights by filter, rotator (0.1°) and focus, sorted, nulls last', () => {
     expect(combos).toEqual([
-      { filter: 'Ha', rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 3, flatFrames: 2 },
-      { filter: 'Ha', rotatorAngleDeg: 303.4, focuserPositionSteps: 15200, lightFrames: 1, flatFrames: 1 },
-      { filter: 'L', rotatorAngleDeg: null, focuserPositionSteps: null, lightFrames: 1, flatFrames: 1 },
-      { filter: 'OIII', rotatorAngleDeg: 123.4, focuserPositionSteps: 15180, lightFrames: 2, flatFrames: 1 },
-      { filter: null, rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 1, flatFrames: 0 },
+      { filter: 'Ha', rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 3, flatFrames: 2, biasOnRecord: false },
+      { filter: 'Ha', rotatorAngleDeg: 303.4, focuserPositionSteps: 15200, lightFrames: 1, flatFrames: 1, biasOnRecord: false },
+      { filter: 'L', rotatorAngleDeg: null, focuserPositionSteps: null, lightFrames: 1, flatFrames: 1, biasOnRecord: false },
+      { filter: 'OIII', rotatorAngleDeg: 123.4, focuserPositionSteps: 15180, lightFrames: 2, flatFrames: 1, biasOnRecord: false },
+      { filter: null, rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 1, flatFrames: 0, biasOnRecord: false },
     ]);
   });
 
   it('wraps a rotator angle that rounds to 360° onto 0°, and matches flats across 0°', () => {
     const around = flatCombos([light('L', 359.97, 100), light('L', 0.02, 100)], [flat('L', 359.8, 100, NIGHT)], NIGHT);
-    expect(around).toEqual([{ filter: 'L', rotatorAngleDeg: 0, focuserPositionSteps: 100, lightFrames: 2, flatFrames: 1 }]);
+    expect(around).toEqual([{ filter: 'L', rotatorAngleDeg: 0, focuserPositionSteps: 100, lightFrames: 2, flatFrames: 1, biasOnRecord: false }]);
   });
 
   it('reads the positions from FITS headers (ROTATANG, FOCUSPOS) through intake', () => {
     const spec = { type: 'Light Frame', dateObs: '2026-01-15T22:00:00', exposureS: 300, filter: 'Ha', rotatorAngleDeg: 87.46, focuserPositionSteps: 15200 };
     const fromFits = [storedFrame(spec), storedFrame({ ...spec, dateObs: '2026-01-15T22:05:00' })];
     const flatFits = storedFrame({ type: 'Flat Field', dateObs: '2026-01-16T08:00:00', exposureS: 1, filter: 'Ha', rotatorAngleDeg: 87.5, focuserPositionSteps: 15200 });
-    expect(flatCombos(fromFits, [flatFits], NIGHT)).toEqual([{ filter: 'Ha', rotatorAngleDeg: 87.5, focuserPositionSteps: 15200, lightFrames: 2, flatFrames: 1 }]);
+    expect(flatCombos(fromFits, [flatFits], NIGHT)).toEqual([{ filter: 'Ha', rotatorAngleDeg: 87.5, focuserPositionSteps: 15200, lightFrames: 2, flatFrames: 1, biasOnRecord: false }]);
   });
 });
 
@@ -105,10 +105,10 @@ describe('the flats step’s recorded positions (matchFramingOf kind "positions"
 
 describe('flatsRecipeTree', () => {
   const combos: FlatCombo[] = [
-    { filter: 'Ha', rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 3, flatFrames: 0 },
-    { filter: 'L', rotatorAngleDeg: null, focuserPositionSteps: null, lightFrames: 1, flatFrames: 0 },
-    { filter: 'OIII', rotatorAngleDeg: null, focuserPositionSteps: 15180, lightFrames: 2, flatFrames: 0 },
-    { filter: null, rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 4, flatFrames: 0 },
+    { filter: 'Ha', rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 3, flatFrames: 0, biasOnRecord: false },
+    { filter: 'L', rotatorAngleDeg: null, focuserPositionSteps: null, lightFrames: 1, flatFrames: 0, biasOnRecord: false },
+    { filter: 'OIII', rotatorAngleDeg: null, focuserPositionSteps: 15180, lightFrames: 2, flatFrames: 0, biasOnRecord: false },
+    { filter: null, rotatorAngleDeg: 123.4, focuserPositionSteps: 15200, lightFrames: 4, flatFrames: 0, biasOnRecord: false },
   ];
 
   it('a note first, then one flats step per combination with a filter, returning to the recorded positions', () => {
