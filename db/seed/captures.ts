@@ -1,8 +1,8 @@
 /**
  * Demo capture history and dark library (invented sessions of a real object): three autumn
  * nights of M31 across two years, one of them partly after a meridian flip without restoring
- * the rotator, a night's panel flats, and two dark sets entered by hand (one older than the
- * default six months). Frame values are plausible for the demo rig (a 26 MP cooled CMOS camera at
+ * the rotator, a night's panel flats with their bias, and two dark sets entered by hand (one
+ * older than the default six months). Frame values are plausible for the demo rig (a 26 MP cooled CMOS camera at
  * gain 100, offset 50, −10 °C); positions are M31's published J2000 coordinates.
  */
 import { randomUUID } from 'node:crypto';
@@ -76,6 +76,15 @@ function demoFrames(): Omit<FrameRow, 'ownerId' | 'intakeId'>[] {
       fingerprint: fnv1a64Hex(`demo-flat|${takenAt}`), fileName: `flats/2026-11-12/FLAT_L_${String(k).padStart(4, '0')}.fits`, frameType: 'flat', object: null,
       takenAt: new Date(takenAt), nightDate: frameNightDate(takenAt, TIME_ZONE), exposureS: 1.2, filter: 'L', gain: 100, offset: 50, binning: 1, setTempC: -10, sensorTempC: -10,
       focuserPositionSteps: FOCUS.L, rotatorAngleDeg: 35, pierSide: null, pointingRaDeg: null, pointingDecDeg: null, wcsRaDeg: null, wcsDecDeg: null, wcsPositionAngleDeg: null, wcsScaleArcsecPerPx: null, wcsMirrored: null,
+    });
+  }
+  // Bias at the same gain, offset and binning, for calibrating those flats.
+  for (let k = 0; k < 50; k += 1) {
+    const takenAt = new Date(flatsAt + 200_000 + k * 2_000).toISOString();
+    rows.push({
+      fingerprint: fnv1a64Hex(`demo-bias|${takenAt}`), fileName: `bias/2026-11-12/BIAS_${String(k).padStart(4, '0')}.fits`, frameType: 'bias', object: null,
+      takenAt: new Date(takenAt), nightDate: frameNightDate(takenAt, TIME_ZONE), exposureS: 0, filter: null, gain: 100, offset: 50, binning: 1, setTempC: -10, sensorTempC: -10,
+      focuserPositionSteps: null, rotatorAngleDeg: 35, pierSide: null, pointingRaDeg: null, pointingDecDeg: null, wcsRaDeg: null, wcsDecDeg: null, wcsPositionAngleDeg: null, wcsScaleArcsecPerPx: null, wcsMirrored: null,
     });
   }
   return rows;
