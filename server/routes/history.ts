@@ -4,15 +4,15 @@ import type { Database } from '@/db/client';
 import { captureFrame, captureShare, framing, member, recipe, rig, target } from '@/db/schema';
 import { forbidden, HttpError, notFound } from '@/server/errors';
 import { toStoredFrame } from '@/server/dry-run-input';
-import { continueExposures, continueStage, type RecordedExposure } from '@/shared/calibration/continue';
+import { continueExposures, continueStage, mostUsedExposures } from '@/shared/calibration/continue';
+import { recordedFramingsWithLights } from '@/shared/calibration/framings';
 import { historySummary, linkLight, objectHistory, targetHistory } from '@/shared/calibration/history';
-import { paDiffMod180Deg, separationDeg } from '@/shared/calibration/sky-geometry';
 import type { HistoryTargetRef, StoredFrame } from '@/shared/calibration/types';
 import { createNode } from '@/shared/recipe/factory';
 import { recipeTreeSchema } from '@/shared/recipe/schema';
 import type { RecipeTree } from '@/shared/recipe/types';
 import { defaultRigInput, type RigInput } from '@/shared/rig/schema';
-import { captureShareSchema, continueRequestSchema, type RecordedFraming } from '@/shared/schemas/calibration-api';
+import { captureShareSchema, continueRequestSchema } from '@/shared/schemas/calibration-api';
 import { createRecipe, derived, recordRevision, toRecipe } from './recipes';
 import { findDefaultSite } from './sites';
 import { parseBody, parseId } from './validate';
@@ -56,35 +56,7 @@ async function targetWithLights(db: Database, ownerId: string, id: string) {
   const ref = refs.find((t) => t.id === id);
   if (!ref) throw notFound('No such target');
   const lights = (await ownLights(db, ownerId)).filter((f) => linkLight(f, refs) === id);
-  return { ref, refs, lights };
-}
-
-/** The solved lights nearest to `chosen` among the recorded framings (centre first, then PA modulo 180°). */
-function lightsOfFraming(lights: StoredFrame[], framings: RecordedFraming[], chosen: RecordedFraming): StoredFrame[] {
-  return lights.filter((f) => {
-    if (f.wcsRaDeg === null || f.wcsDecDeg === null) return false;
-    const score = (g: RecordedFraming) => separationDeg(f.wcsRaDeg!, f.wcsDecDeg!, g.raDeg, g.decDeg) * 60 + paDiffMod180Deg(f.wcsPositionAngleDeg ?? 0, g.positionAngleDeg);
-    const nearest = framings.reduce((best, g) => (score(g) < score(best) ? g : best), framings[0]!);
-    return nearest.key === chosen.key;
-  });
-}
-
-/** Per filter, the (exposure, gain, offset, binning) most of its frames used (ties: the longer integration). */
-export function mostUsedExposures(lights: readonly StoredFrame[]): RecordedExposure[] {
-  const tally = new Map<string, { e: RecordedExposure; frames: number; seconds: number }>();
-  for (const f of lights) {
-    const key = JSON.stringify([f.filter, f.exposureS, f.gain, f.offset, f.binning]);
-    const t = tally.get(key) ?? { e: { filter: f.filter, exposureS: f.exposureS, gain: f.gain, offset: f.offset, binning: f.binning }, frames: 0, seconds: 0 };
-    t.frames += 1;
-    t.seconds += f.exposureS;
-    tally.set(key, t);
-  }
-  const best = new Map<string | null, { e: RecordedExposure; frames: number; seconds: number }>();
-  for (const t of tally.values()) {
-    const b = best.get(t.e.filter);
-    if (!b || t.frames > b.frames || (t.frames === b.frames && t.seconds > b.seconds)) best.set(t.e.filter, t);
-  }
-  return [...best.values()].map((t) => t.e);
+  return { ref, lights };
 }
 
 /** /api/history: what the user has captured, per target; "continue this target"; sharing with clubs. */
@@ -99,9 +71,10 @@ export function historyRouter(db: Database): Router {
 
   r.get('/targets/:id', async (req, res) => {
     const ownerId = res.locals.user.id;
-    const { ref, refs, lights } = await targetWithLights(db, ownerId, parseId(req.params.id, 'target'));
+    const { ref, lights } = await targetWithLights(db, ownerId, parseId(req.params.id, 'target'));
     const shares = await sharesOf(db, ownerId, ref.id);
-    res.json(targetHistory(ref, lights, shares.get(ref.id) ?? [], refs));
+    // `lights` are already this target's (linked among all targets): no second linking pass.
+    res.json(targetHistory(ref, lights, shares.get(ref.id) ?? [], [ref]));
   });
 
   // Lights no target matched, by their OBJECT text (the rows of GET / with a null targetId).
@@ -118,11 +91,11 @@ export function historyRouter(db: Database): Router {
     const id = parseId(req.params.id, 'target');
     const body = parseBody(continueRequestSchema, req);
     if (body.recipeId && body.version === undefined) throw new HttpError(400, 'invalid-input', 'Some fields need attention', { fields: { version: ['Send the version of the recipe you saw'] } });
-    const { ref, refs, lights } = await targetWithLights(db, ownerId, id);
-    const history = targetHistory(ref, lights, [], refs);
-    const chosen = history.framings.find((f) => f.key === body.framingKey);
-    if (!chosen) throw notFound('That recorded framing is no longer in the history');
-    const exposures = mostUsedExposures(lightsOfFraming(lights, history.framings, chosen));
+    const { ref, lights } = await targetWithLights(db, ownerId, id);
+    const recorded = recordedFramingsWithLights(lights, ref.framings).find((r) => r.framing.key === body.framingKey);
+    if (!recorded) throw notFound('That recorded framing is no longer in the history');
+    const chosen = recorded.framing;
+    const exposures = mostUsedExposures(recorded.lights);
 
     const [into] = body.recipeId ? await db.select().from(recipe).where(and(eq(recipe.id, body.recipeId), eq(recipe.ownerId, ownerId), isNull(recipe.deletedAt))) : [];
     if (body.recipeId && !into) throw notFound('No such recipe');

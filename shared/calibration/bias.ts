@@ -1,5 +1,5 @@
 import type { StoredFrame } from '@/shared/calibration/types';
-import { darkFrameTemperatureC, isDarkSetStale } from '@/shared/calibration/darks';
+import { darkFrameTemperatureC, isDarkSetStale, keyPart as part } from '@/shared/calibration/darks';
 import type { BiasLibrarySet } from '@/shared/schemas/calibration-api';
 
 /*
@@ -17,8 +17,6 @@ interface BiasGroupKey {
   temperatureC: number | null;
   nightDate: string;
 }
-
-const part = (v: number | null) => (v === null ? '-' : String(v));
 
 /** A stable, readable key of a bias set, e.g. `2026-03-14|g100|o50|b1|-10C|High%20Gain` (`-C` without a temperature). */
 export function biasGroupKey(k: BiasGroupKey): string {

@@ -1,3 +1,4 @@
+import type { StoredFrame } from '@/shared/calibration/types';
 import type { RecordedFraming } from '@/shared/schemas/calibration-api';
 import { wrap360 } from '@/shared/calibration/sky-geometry';
 import { createNode } from '@/shared/recipe/factory';
@@ -77,4 +78,22 @@ export function continueStage(targetId: string, targetLabel: string, framing: Re
     window: { notBefore: 'astronomical-dusk', endBy: 'astronomical-dawn' },
   });
   return stageSchema.parse({ ...stage, children }) as NodeOf<'stage'>;
+}
+
+/** Per filter, the (exposure, gain, offset, binning) most of its frames used (ties: the longer integration). */
+export function mostUsedExposures(lights: readonly Pick<StoredFrame, 'filter' | 'exposureS' | 'gain' | 'offset' | 'binning'>[]): RecordedExposure[] {
+  const tally = new Map<string, { e: RecordedExposure; frames: number; seconds: number }>();
+  for (const f of lights) {
+    const key = JSON.stringify([f.filter, f.exposureS, f.gain, f.offset, f.binning]);
+    const t = tally.get(key) ?? { e: { filter: f.filter, exposureS: f.exposureS, gain: f.gain, offset: f.offset, binning: f.binning }, frames: 0, seconds: 0 };
+    t.frames += 1;
+    t.seconds += f.exposureS;
+    tally.set(key, t);
+  }
+  const best = new Map<string | null, { e: RecordedExposure; frames: number; seconds: number }>();
+  for (const t of tally.values()) {
+    const b = best.get(t.e.filter);
+    if (!b || t.frames > b.frames || (t.frames === b.frames && t.seconds > b.seconds)) best.set(t.e.filter, t);
+  }
+  return [...best.values()].map((t) => t.e);
 }

@@ -15,11 +15,12 @@ interface DarkGroupKey extends DarkMatchKey {
   nightDate: string;
 }
 
-const part = (v: number | null) => (v === null ? '-' : String(v));
+/** One setting in a set key: the number, or `-` when the frames did not record it. */
+export const keyPart = (v: number | null) => (v === null ? '-' : String(v));
 
 /** A stable, readable key of a grouped set, e.g. `2026-03-14|300s|g100|o50|b1|-10C|High%20Gain`. */
 export function darkGroupKey(k: DarkGroupKey): string {
-  return [k.nightDate, `${k.exposureS}s`, `g${part(k.gain)}`, `o${part(k.offset)}`, `b${k.binning}`, `${k.temperatureC}C`, encodeURIComponent(k.readoutMode ?? '')].join('|');
+  return [k.nightDate, `${k.exposureS}s`, `g${keyPart(k.gain)}`, `o${keyPart(k.offset)}`, `b${k.binning}`, `${k.temperatureC}C`, encodeURIComponent(k.readoutMode ?? '')].join('|');
 }
 
 /** Set-point of a dark frame rounded to 1 °C: SET-TEMP, else the sensor reading; null without either. */
@@ -95,7 +96,7 @@ export function darkStepsPlan(darks: readonly DarkToShoot[]): { temperatureC: nu
   for (const d of darks) {
     const temp = byTemp.get(d.temperatureC) ?? new Map();
     byTemp.set(d.temperatureC, temp);
-    const key = `${part(d.gain)}|${part(d.offset)}|${d.binning}`;
+    const key = `${keyPart(d.gain)}|${keyPart(d.offset)}|${d.binning}`;
     const step = temp.get(key) ?? { gain: d.gain, offset: d.offset, binning: d.binning, exposures: new Set<number>() };
     temp.set(key, step);
     step.exposures.add(d.exposureS);

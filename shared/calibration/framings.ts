@@ -97,7 +97,12 @@ function summarise(c: Cluster, userFramings: HistoryTargetRef['framings']): Reco
  * centre is the mean of all its frames and `byFilter` counts both sides. Most integration first.
  */
 export function recordedFramings(lights: readonly StoredFrame[], userFramings: HistoryTargetRef['framings']): RecordedFraming[] {
+  return recordedFramingsWithLights(lights, userFramings).map((r) => r.framing);
+}
+
+/** `recordedFramings`, each with the lights it was made of (for "continue": their exposures). */
+export function recordedFramingsWithLights(lights: readonly StoredFrame[], userFramings: HistoryTargetRef['framings']): { framing: RecordedFraming; lights: StoredFrame[] }[] {
   return clusterFrames(lights)
-    .map((c) => summarise(c, userFramings))
-    .sort((a, b) => b.seconds + b.flippedSeconds - (a.seconds + a.flippedSeconds) || a.key.localeCompare(b.key));
+    .map((c) => ({ framing: summarise(c, userFramings), lights: c.frames as StoredFrame[] }))
+    .sort((a, b) => b.framing.seconds + b.framing.flippedSeconds - (a.framing.seconds + a.framing.flippedSeconds) || a.framing.key.localeCompare(b.framing.key));
 }
